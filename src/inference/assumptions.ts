@@ -1,0 +1,35 @@
+/** The assumptions that drove a result, in words, for the report and the JSON. */
+import type { Dist } from '../io/distribution.ts';
+import type { SystemInput } from '../io/system.ts';
+
+export function describeDist(d: Dist, digits = 3): string {
+  const f = (x: number) => Number(x.toPrecision(digits)).toString();
+  switch (d.kind) {
+    case 'fixed': return `${f(d.value)} (fixed)`;
+    case 'normal': return `${f(d.mean)} +- ${f(d.sigma)}`;
+    case 'split-normal': return `${f(d.mode)} +${f(d.plus)} -${f(d.minus)}`;
+    case 'uniform': return `uniform on [${f(d.min)}, ${f(d.max)}]`;
+    case 'upper-limit': return `< ${f(d.limit)} (${f(100 * d.confidence)} % confidence)`;
+    case 'samples': return `${d.values.length} samples`;
+  }
+}
+
+export function assumptionLines(s: SystemInput): string[] {
+  const a = s.assumptions;
+  const lines: string[] = [];
+  if (a.thermal === 'none') {
+    lines.push('Pure reflection: thermal emission of the planet ignored (assumptions.thermal = "none").');
+  } else {
+    lines.push(`Thermal emission: blackbody planet with dayside and nightside temperatures of Cowan & Agol (2011), heat redistribution eps ${describeDist(a.redistribution)}.`);
+    lines.push('Star: blackbody at its effective temperature in the band-flux ratio.');
+  }
+  lines.push(`Bond albedo A_B = q A_g with phase integral q ${describeDist(a.phaseIntegral)}; a band geometric albedo stands in for the bolometric one.`);
+  lines.push('Lambert phase function; uniform prior on A_g over [0, 1/q] (energy conservation A_B <= 1).');
+  lines.push(`Band "${s.band.id}" (${s.band.minNm}-${s.band.maxNm} nm${s.band.approximate ? ', approximate shape' : ''}), integrals weighted per ${a.weighting}.`);
+  if (s.measurements.daysideTemperatureK) lines.push('The measured dayside brightness temperature is compared with the model dayside temperature directly.');
+  if (s.planet.massMjup || s.planet.massMearth) {
+    lines.push(`Mass effects: limb darkening u ${describeDist(a.limbDarkening)}, gravity darkening g ${describeDist(a.gravityDarkening)} (typical values).`);
+  }
+  lines.push(...s.notes);
+  return lines;
+}

@@ -1,0 +1,131 @@
+/**
+ * The albedo posterior of a system (DESIGN section 4): nuisance draws, the albedo
+ * grid per draw, evidence weights, posterior draws and their summaries, the
+ * all-reflected albedo, the (eps, q) sensitivity corners, mass effects, warnings.
+ * Pure apart from the clock used for diagnostics.computeMs; the random generator
+ * comes from the seed (or is passed in by tests).
+ */
+import { HesperError } from '../errors.ts';
+import { lambertPhaseFunction } from '../physics/reflection.ts';
+import type { SystemInput } from '../io/system.ts';
+import { assumptionLines } from './assumptions.ts';
+import { effectiveSampleSize, runGrid } from './grid.ts';
+import { significanceSigma } from './likelihood.ts';
+import { drawMeasurement, likelihoodsOf } from './measurements.ts';
+import { type Nuisance, drawNuisance } from './nuisance.ts';
+import { createRng, type Rng } from './random.ts';
+import { samplePosterior } from './sample-posterior.ts';
+import type { ModelSettings } from './signal-model.ts';
+import { roundSig, summarize } from './summary.ts';
+import type { AlbedoPosterior, MassEffects, SensitivityRow } from './types.ts';
+import { posteriorWarnings } from './warnings.ts';
+
+export interface InferOptions {
+  samples?: number;
+  gridNodes?: number;
+  seed?: number;
+  /** A generator to use instead of one seeded from `seed` (tests). */
+  rng?: Rng;
+}
+
+/** Corners of the sensitivity table: no / full redistribution x q = 1 / 1.5 (Lambert). */
+export const SENSITIVITY_CORNERS: ReadonlyArray<{ redistribution: number; phaseIntegral: number }> = [
+  { redistribution: 0, phaseIntegral: 1 },
+  { redistribution: 0, phaseIntegral: 1.5 },
+  { redistribution: 1, phaseIntegral: 1 },
+  { redistribution: 1, phaseIntegral: 1.5 },
+];
+
+function settingsOf(s: SystemInput): ModelSettings {
+  return { band: s.band, weighting: s.assumptions.weighting, thermal: s.assumptions.thermal !== 'none' };
+}
+
+function allReflected(s: SystemInput, draws: Nuisance[], rng: Rng) {
+  const useDepth = s.measurements.eclipseDepthPpm !== undefined;
+  const d = (useDepth ? s.measurements.eclipseDepthPpm : s.measurements.phaseAmplitudePpm)!;
+  const values = new Float64Array(draws.length);
+  for (let i = 0; i < draws.length; i++) {
+    const th = draws[i]!;
+    const geom = (th.radiusRatio / th.scaledSemiMajorAxis) ** 2;
+    const perAg = useDepth
+      ? geom * lambertPhaseFunction(Math.abs(Math.PI / 2 - th.inclinationRad))
+      : geom * Math.sin(th.inclinationRad);
+    values[i] = (1e-6 * drawMeasurement(d, rng)) / perAg;
+  }
+  return summarize(values);
+}
+
+function sensitivity(s: SystemInput, draws: Nuisance[], settings: ModelSettings, seed: number): SensitivityRow[] {
+  const lik = likelihoodsOf(s);
+  const count = Math.max(250, Math.floor(draws.length / 8));
+  const subset = draws.slice(0, count);
+  return SENSITIVITY_CORNERS.map((corner, c) => {
+    const fixed = subset.map((th) => ({ ...th, redistribution: corner.redistribution, phaseIntegral: corner.phaseIntegral }));
+    const grid = runGrid(fixed, settings, lik, Math.max(64, Math.floor(s.assumptions.gridNodes / 4)));
+    if (!grid.weights.some((w) => w > 0)) {
+      return { ...corner, geometricAlbedo: summarize([NaN]) };
+    }
+    const post = samplePosterior(grid, settings, createRng(seed * 7919 + 101 + c), count);
+    return { ...corner, geometricAlbedo: summarize(post.geometricAlbedo) };
+  });
+}
+
+function massEffectsOf(grid: ReturnType<typeof runGrid>, drawIndex: Int32Array): MassEffects | undefined {
+  if (grid.masses.every((m) => m === undefined)) return undefined;
+  const e: number[] = [];
+  const b: number[] = [];
+  const k: number[] = [];
+  for (const i of drawIndex) {
+    const m = grid.masses[i];
+    if (!m) continue;
+    e.push(m.ellipsoidalPpm);
+    b.push(m.beamingPpm);
+    k.push(m.rvSemiAmplitudeMs);
+  }
+  return { ellipsoidalPpm: summarize(e), beamingPpm: summarize(b), rvSemiAmplitudeMs: summarize(k) };
+}
+
+export function inferAlbedo(s: SystemInput, options: InferOptions = {}): AlbedoPosterior {
+  const t0 = performance.now();
+  const samples = options.samples ?? s.assumptions.samples;
+  const nodes = options.gridNodes ?? s.assumptions.gridNodes;
+  const seed = options.seed ?? s.assumptions.seed;
+  const rng = options.rng ?? createRng(seed);
+  const settings = settingsOf(s);
+
+  const draws: Nuisance[] = new Array(samples);
+  for (let i = 0; i < samples; i++) draws[i] = drawNuisance(s, rng);
+  const grid = runGrid(draws, settings, likelihoodsOf(s), nodes);
+  if (!grid.weights.some((w) => w > 0)) {
+    throw new HesperError('no-posterior-support', 'no draw reproduces the measurements', [
+      { path: 'measurements', message: 'every model signal has zero likelihood under the measurements; check the values and their uncertainties' },
+    ]);
+  }
+  const post = samplePosterior(grid, settings, rng, samples);
+  const ess = effectiveSampleSize(grid.weights);
+  const thermalFraction = summarize(post.thermalFraction);
+  const massEffects = massEffectsOf(grid, post.drawIndex);
+  const m = s.measurements;
+  const detected = [m.eclipseDepthPpm, m.phaseAmplitudePpm].some((d) => d !== undefined && significanceSigma(d) >= 3);
+
+  const result: AlbedoPosterior = {
+    name: s.name,
+    band: { id: s.band.id, label: s.band.label, minNm: s.band.minNm, maxNm: s.band.maxNm, approximate: s.band.approximate, weighting: s.assumptions.weighting },
+    geometricAlbedo: summarize(post.geometricAlbedo),
+    bondAlbedo: summarize(post.bondAlbedo),
+    daysideTemperatureK: summarize(post.daysideTemperatureK),
+    equilibriumTemperatureK: summarize(post.equilibriumTemperatureK),
+    thermalDepthPpm: summarize(post.thermalDepthPpm),
+    reflectedDepthPpm: summarize(post.reflectedDepthPpm),
+    thermalFraction,
+    allReflectedGeometricAlbedo: allReflected(s, draws, rng),
+    detected,
+    sensitivity: sensitivity(s, draws, settings, seed),
+    ...(massEffects ? { massEffects } : {}),
+    assumptions: assumptionLines(s),
+    diagnostics: { effectiveSampleSize: roundSig(ess, 4), samples, gridNodes: nodes, seed, computeMs: 0 },
+    warnings: posteriorWarnings({ system: s, grid, posterior: post, thermalFraction, ...(massEffects ? { massEffects } : {}), effectiveSampleSize: ess }),
+  };
+  result.diagnostics.computeMs = roundSig(performance.now() - t0, 3);
+  return result;
+}

@@ -1,0 +1,49 @@
+/** Likelihoods and simple draws for the measured signals of a system. */
+import type { Dist } from '../io/distribution.ts';
+import type { SystemInput } from '../io/system.ts';
+import type { Likelihoods } from './grid.ts';
+import { logLikelihoodOf, upperLimitSigma } from './likelihood.ts';
+import type { Rng } from './random.ts';
+
+export function likelihoodsOf(s: SystemInput): Likelihoods {
+  const lik: Likelihoods = {};
+  const m = s.measurements;
+  for (const key of ['eclipseDepthPpm', 'phaseAmplitudePpm', 'nightsideFluxPpm', 'daysideTemperatureK', 'ellipsoidalAmplitudePpm', 'beamingAmplitudePpm'] as const) {
+    const d = m[key];
+    if (d) lik[key] = logLikelihoodOf(d);
+  }
+  return lik;
+}
+
+/** One draw of a measured value from its stated uncertainty (for the all-reflected albedo). */
+export function drawMeasurement(d: Dist, rng: Rng): number {
+  switch (d.kind) {
+    case 'fixed': return d.value;
+    case 'normal': return d.mean + d.sigma * rng.normal();
+    case 'split-normal': {
+      const upper = rng.uniform() < d.plus / (d.plus + d.minus);
+      const z = Math.abs(rng.normal());
+      return upper ? d.mode + d.plus * z : d.mode - d.minus * z;
+    }
+    case 'uniform': return d.min + (d.max - d.min) * rng.uniform();
+    case 'upper-limit': return Math.abs(rng.normal()) * upperLimitSigma(d.limit, d.confidence);
+    case 'samples': return d.values[Math.floor(rng.uniform() * d.values.length)]!;
+  }
+}
+
+/** Central value and a one-sigma width of a measurement, for warnings. */
+export function centreAndWidth(d: Dist): { centre: number; width: number } {
+  switch (d.kind) {
+    case 'fixed': return { centre: d.value, width: 0 };
+    case 'normal': return { centre: d.mean, width: d.sigma };
+    case 'split-normal': return { centre: d.mode, width: d.minus };
+    case 'uniform': return { centre: 0.5 * (d.min + d.max), width: (d.max - d.min) / Math.sqrt(12) };
+    case 'upper-limit': return { centre: 0, width: upperLimitSigma(d.limit, d.confidence) };
+    case 'samples': {
+      const n = d.values.length;
+      const mean = d.values.reduce((a, b) => a + b, 0) / n;
+      const sd = Math.sqrt(d.values.reduce((a, b) => a + (b - mean) ** 2, 0) / Math.max(1, n - 1));
+      return { centre: mean, width: sd };
+    }
+  }
+}

@@ -1,0 +1,143 @@
+/**
+ * The model signals for one nuisance draw as functions of the Bond albedo on the grid
+ * (DESIGN sections 3 and 4). Everything that does not depend on the albedo is
+ * computed once per draw here; the albedo-dependent part is a few multiplications
+ * and two band-flux lookups per grid node.
+ *
+ * Eclipse depth     = A_g (k/aR)^2 Phi(90deg - i) + k^2 F(T_day) / F(T*)
+ * Phase amplitude   = [A_g (k/aR)^2 + k^2 (F(T_day) - F(T_night)) / F(T*)] sin i
+ *   (Lambert peak-to-trough is exactly A_g (k/aR)^2 sin i, reference/physics.md;
+ *    two-hemisphere thermal term (F_d - F_n) sin i, common practice)
+ * Nightside flux    = A_g (k/aR)^2 Phi(90deg + i) + k^2 F(T_night) / F(T*)
+ * T_day, T_night scale as (1 - A_B)^(1/4) at fixed eps (Cowan & Agol 2011, ApJ 729, 54).
+ */
+import type { Band } from '../physics/bandpass.ts';
+import { bandFlux, getBandTable } from '../physics/bandpass.ts';
+import { TABLE_MAX_K, TABLE_MIN_K, tableLogFlux, type BandTable } from '../physics/band-table.ts';
+import { beamingAmplitude, ellipsoidalAmplitude, rvSemiAmplitudeMs } from '../physics/mass-effects.ts';
+import { lambertPhaseFunction } from '../physics/reflection.ts';
+import { daysideTemperatureK, nightsideTemperatureK } from '../physics/temperature.ts';
+import type { Nuisance } from './nuisance.ts';
+
+export interface ModelSettings {
+  band: Band;
+  weighting: 'photon' | 'energy';
+  thermal: boolean;
+}
+
+/** The band-flux table of the settings, fetched once for the hot loop. */
+export function planetTable(m: ModelSettings): BandTable {
+  return getBandTable(m.band, m.weighting);
+}
+
+export const LN_TABLE_MIN_K = Math.log(TABLE_MIN_K);
+export const LN_TABLE_MAX_K = Math.log(TABLE_MAX_K);
+
+export interface DrawModel {
+  /** (k/aR)^2 Phi(90 - i): reflected eclipse depth per unit A_g. */
+  reflectedDepthPerAg: number;
+  /** (k/aR)^2 sin i: reflected phase amplitude per unit A_g. */
+  reflectedAmplitudePerAg: number;
+  /** (k/aR)^2 Phi(90 + i): reflected flux at transit phase per unit A_g. */
+  reflectedNightPerAg: number;
+  sinI: number;
+  /** T_day and T_night at A_B = 0. */
+  dayZeroK: number;
+  nightZeroK: number;
+  /** k^2 / F_band(T*), to turn a band flux into a planet-to-star ratio. */
+  thermalScale: number;
+  /** ln of thermalScale (-Infinity when thermal emission is off). */
+  lnThermalScale: number;
+  /** ln T_day and ln T_night at A_B = 0 (-Infinity for 0 K). */
+  lnDayZeroK: number;
+  lnNightZeroK: number;
+  /** Equilibrium temperature (full redistribution) at A_B = 0. */
+  equilibriumZeroK: number;
+}
+
+export interface MassPrediction {
+  rvSemiAmplitudeMs: number;
+  beamingPpm: number;
+  ellipsoidalPpm: number;
+}
+
+export function drawModel(n: Nuisance, m: ModelSettings): DrawModel {
+  const geom = (n.radiusRatio / n.scaledSemiMajorAxis) ** 2;
+  const halfPi = Math.PI / 2;
+  const sinI = Math.sin(n.inclinationRad);
+  const dayZeroK = daysideTemperatureK(n.teffK, n.scaledSemiMajorAxis, 0, n.redistribution);
+  const nightZeroK = nightsideTemperatureK(n.teffK, n.scaledSemiMajorAxis, 0, n.redistribution);
+  const thermalScale = m.thermal ? (n.radiusRatio * n.radiusRatio) / bandFlux(m.band, n.teffK, m.weighting) : 0;
+  return {
+    lnThermalScale: Math.log(thermalScale),
+    lnDayZeroK: Math.log(dayZeroK),
+    lnNightZeroK: Math.log(nightZeroK),
+    reflectedDepthPerAg: geom * lambertPhaseFunction(Math.abs(halfPi - n.inclinationRad)),
+    reflectedAmplitudePerAg: geom * sinI,
+    reflectedNightPerAg: geom * lambertPhaseFunction(Math.min(Math.PI, halfPi + n.inclinationRad)),
+    sinI,
+    dayZeroK,
+    nightZeroK,
+    thermalScale,
+    // eps = 1 limit of the dayside formula: T0 (1 - A_B)^(1/4) / sqrt(2) (Cowan & Agol 2011).
+    equilibriumZeroK: daysideTemperatureK(n.teffK, n.scaledSemiMajorAxis, 0, 1),
+  };
+}
+
+/**
+ * The hot-loop form of thermalRatio: the planet-to-star band-flux ratio at ln T, read
+ * from the table directly (0 below the table's 10 K; the table ends at 20000 K, above
+ * any planet this tool accepts).
+ */
+export function thermalRatioLn(dm: DrawModel, table: BandTable, lnT: number): number {
+  if (!(lnT >= LN_TABLE_MIN_K) || dm.thermalScale === 0) return 0;
+  return Math.exp(dm.lnThermalScale + tableLogFlux(table, lnT < LN_TABLE_MAX_K ? lnT : LN_TABLE_MAX_K));
+}
+
+/**
+ * thermalRatioLn for a whole grid row: out[j] = ratio at ln T = lnT0 + lnFactor[j].
+ * The table's cubic Hermite lookup (band-table.ts) is written out here because this
+ * loop runs samples x nodes times per interpretation.
+ */
+export function thermalRatioRow(dm: DrawModel, table: BandTable, lnT0: number, lnFactor: Float64Array, out: Float64Array): void {
+  const n = lnFactor.length;
+  if (dm.thermalScale === 0 || lnT0 === -Infinity) {
+    out.fill(0, 0, n);
+    return;
+  }
+  const { lnFlux, tangent, invStep } = table;
+  const base = table.lnT0;
+  const last = lnFlux.length - 2;
+  const scale = dm.lnThermalScale;
+  for (let j = 0; j < n; j++) {
+    let lnT = lnT0 + lnFactor[j]!;
+    if (!(lnT >= LN_TABLE_MIN_K)) {
+      out[j] = 0;
+      continue;
+    }
+    if (lnT > LN_TABLE_MAX_K) lnT = LN_TABLE_MAX_K;
+    const s = (lnT - base) * invStep;
+    let i = s | 0;
+    if (i > last) i = last;
+    const t = s - i;
+    const u = 1 - t;
+    const lnF = (1 + 2 * t) * u * u * lnFlux[i]! + t * u * u * tangent[i]! + t * t * (3 - 2 * t) * lnFlux[i + 1]! - t * t * u * tangent[i + 1]!;
+    out[j] = Math.exp(scale + lnF);
+  }
+}
+
+/** The planet's band flux relative to the star at temperature tK (0 below the table). */
+export function thermalRatio(dm: DrawModel, m: ModelSettings, tK: number): number {
+  if (dm.thermalScale === 0 || tK < 10) return 0;
+  return dm.thermalScale * bandFlux(m.band, tK, m.weighting);
+}
+
+export function predictMassEffects(n: Nuisance, band: Band): MassPrediction | undefined {
+  if (n.planetMassKg === undefined || n.starMassKg === undefined || n.periodS === undefined) return undefined;
+  const k = rvSemiAmplitudeMs(n.periodS, n.planetMassKg, n.starMassKg, n.inclinationRad);
+  return {
+    rvSemiAmplitudeMs: k,
+    beamingPpm: beamingAmplitude(n.teffK, band, k) * 1e6,
+    ellipsoidalPpm: ellipsoidalAmplitude(n.planetMassKg, n.starMassKg, n.scaledSemiMajorAxis, n.inclinationRad, n.limbDarkeningU, n.gravityDarkeningG) * 1e6,
+  };
+}

@@ -1,0 +1,42 @@
+/** The albedo posterior as reported (DESIGN section 7, "Interpretation"). */
+import type { Summary } from './summary.ts';
+
+export interface SensitivityRow {
+  redistribution: number;
+  phaseIntegral: number;
+  geometricAlbedo: Summary;
+}
+
+export interface MassEffects {
+  ellipsoidalPpm: Summary;
+  beamingPpm: Summary;
+  rvSemiAmplitudeMs: Summary;
+}
+
+export interface Diagnostics {
+  effectiveSampleSize: number;
+  samples: number;
+  gridNodes: number;
+  seed: number;
+  computeMs: number;
+}
+
+export interface AlbedoPosterior {
+  name: string;
+  band: { id: string; label: string; minNm: number; maxNm: number; approximate: boolean; weighting: 'photon' | 'energy' };
+  geometricAlbedo: Summary;
+  bondAlbedo: Summary;
+  daysideTemperatureK: Summary;
+  equilibriumTemperatureK: Summary;
+  thermalDepthPpm: Summary;
+  reflectedDepthPpm: Summary;
+  thermalFraction: Summary;
+  allReflectedGeometricAlbedo: Summary;
+  detected: boolean;
+  sensitivity: SensitivityRow[];
+  massEffects?: MassEffects;
+  /** The assumptions that drove the result, in words. */
+  assumptions: string[];
+  diagnostics: Diagnostics;
+  warnings: string[];
+}

@@ -1,0 +1,56 @@
+/**
+ * Reading files named inside an input file (CLI only; the API never reads paths).
+ * Relative paths resolve against the directory of the file that names them, and
+ * anything that is not a regular file (a directory, a device, a FIFO) is refused.
+ */
+import { readFileSync, statSync } from 'node:fs';
+import path from 'node:path';
+import { inputError } from '../errors.ts';
+
+/** Largest file hesper reads as an input (samples, response curves, light curves). */
+export const MAX_INPUT_FILE_BYTES = 256 * 1024 * 1024;
+
+export function resolveInputPath(baseDir: string, file: string): string {
+  return path.isAbsolute(file) ? file : path.resolve(baseDir, file);
+}
+
+/** Reads a regular file as UTF-8 text, or throws file-unreadable naming `fieldPath`. */
+export function readInputText(fieldPath: string, baseDir: string, file: string): string {
+  const full = resolveInputPath(baseDir, file);
+  let size: number;
+  try {
+    const st = statSync(full);
+    if (!st.isFile()) throw inputError('file-unreadable', fieldPath, `"${file}" is not a regular file`, file);
+    size = st.size;
+  } catch (e) {
+    if ((e as { code?: string }).code === 'file-unreadable') throw e;
+    throw inputError('file-unreadable', fieldPath, `cannot read "${file}" (resolved to ${full}): ${(e as NodeJS.ErrnoException).code ?? 'error'}`, file);
+  }
+  if (size > MAX_INPUT_FILE_BYTES) {
+    throw inputError('file-unreadable', fieldPath, `"${file}" is ${size} bytes, larger than the ${MAX_INPUT_FILE_BYTES}-byte limit`, file);
+  }
+  try {
+    return readFileSync(full, 'utf8');
+  } catch (e) {
+    throw inputError('file-unreadable', fieldPath, `cannot read "${file}": ${(e as NodeJS.ErrnoException).code ?? 'error'}`, file);
+  }
+}
+
+/** Parses JSON text, turning a syntax error into an issue with its line and column. */
+export function parseJsonText(fieldPath: string, text: string, label: string): unknown {
+  try {
+    return JSON.parse(text);
+  } catch (e) {
+    const msg = (e as Error).message;
+    const m = /position (\d+)/.exec(msg);
+    let where = '';
+    if (m) {
+      const pos = Number(m[1]);
+      const before = text.slice(0, pos);
+      const line = before.split('\n').length;
+      const col = pos - before.lastIndexOf('\n');
+      where = ` at line ${line}, column ${col}`;
+    }
+    throw inputError('invalid-input', fieldPath, `${label} is not valid JSON${where}: ${msg}`);
+  }
+}

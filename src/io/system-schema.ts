@@ -1,0 +1,88 @@
+/**
+ * zod schema of the system file (DESIGN section 7). The JSON Schema shipped for
+ * editors (src/io/system-file.schema.json) is generated from this schema.
+ */
+import { z } from 'zod';
+import { measurementQuantity, parameterQuantity } from './quantity-schema.ts';
+
+const opt = <T extends z.ZodType>(s: T, d: string) => s.optional().describe(d);
+
+export const bandSchema = z.union(
+  [
+    z.string().min(1).max(64).describe('A built-in band name; `hesper bands` lists them.'),
+    z.object({ tophatNm: z.tuple([z.number(), z.number()]) }).strict().describe('A top-hat band [min, max] in nm.'),
+    z.object({ responseFile: z.string().min(1).max(1024) }).strict().describe('A CSV response curve (wavelength_nm,weight or wavelength_um,weight), relative to the system file (CLI only).'),
+    z
+      .object({ response: z.array(z.tuple([z.number(), z.number()])).min(2).max(20_000), unit: z.enum(['nm', 'um']).default('nm') })
+      .strict()
+      .describe('An inline response curve: [[wavelength, weight], ...].'),
+  ],
+  { error: 'must be a band name, {tophatNm: [min, max]}, {responseFile} or {response: [[nm, weight], ...]}' },
+);
+
+export const starSchema = z
+  .object({
+    teffK: parameterQuantity.describe('Stellar effective temperature [K].'),
+    radiusRsun: opt(parameterQuantity, 'Stellar radius [Rsun]; needed with radiusRjup/radiusRearth or semiMajorAxisAu.'),
+    massMsun: opt(parameterQuantity, 'Stellar mass [Msun]; needed with periodDays and for mass effects.'),
+    metallicity: z.number().min(-2).max(2).default(0).describe('[M/H] in dex, for condensation curves.'),
+  })
+  .strict();
+
+export const planetSchema = z
+  .object({
+    radiusRatio: opt(parameterQuantity, 'Rp/R*.'),
+    radiusRjup: opt(parameterQuantity, 'Planet radius [Rjup], with star.radiusRsun.'),
+    radiusRearth: opt(parameterQuantity, 'Planet radius [Rearth], with star.radiusRsun.'),
+    scaledSemiMajorAxis: opt(parameterQuantity, 'a/R*.'),
+    semiMajorAxisAu: opt(parameterQuantity, 'Semi-major axis [au], with star.radiusRsun.'),
+    periodDays: opt(parameterQuantity, 'Orbital period [days].'),
+    inclinationDeg: opt(parameterQuantity, 'Orbital inclination [deg]; 90 if not given.'),
+    massMjup: opt(parameterQuantity, 'Planet mass [Mjup] (true mass, or M sin i if inclination is unknown).'),
+    massMearth: opt(parameterQuantity, 'Planet mass [Mearth].'),
+  })
+  .strict();
+
+export const measurementsSchema = z
+  .object({
+    eclipseDepthPpm: opt(measurementQuantity, 'Secondary-eclipse depth [ppm] in the band.'),
+    phaseAmplitudePpm: opt(measurementQuantity, "Peak-to-trough amplitude of the planet's phase variation [ppm]."),
+    phaseSemiAmplitudePpm: opt(measurementQuantity, 'Semi-amplitude of the phase variation [ppm]; doubled on reading.'),
+    nightsideFluxPpm: opt(measurementQuantity, 'Planet flux at transit phase (nightside) [ppm].'),
+    daysideTemperatureK: opt(measurementQuantity, 'Dayside brightness temperature measured in another band [K].'),
+    phaseOffsetDeg: opt(measurementQuantity, 'Phase-curve peak offset [deg]; positive = eastward, peak before eclipse.'),
+    ellipsoidalAmplitudePpm: opt(measurementQuantity, 'Ellipsoidal semi-amplitude [ppm].'),
+    beamingAmplitudePpm: opt(measurementQuantity, 'Doppler-beaming semi-amplitude [ppm].'),
+  })
+  .strict();
+
+export const assumptionsSchema = z
+  .object({
+    thermal: z.enum(['self-consistent', 'none']).default('self-consistent').describe('Model the thermal emission (default) or assume pure reflection.'),
+    weighting: z.enum(['photon', 'energy']).default('photon').describe('Band integrals per photon (default) or per energy.'),
+    redistribution: parameterQuantity.default({ min: 0, max: 1 }).describe('Heat-redistribution efficiency eps in [0, 1].'),
+    phaseIntegral: parameterQuantity.default({ min: 1, max: 1.5 }).describe('Phase integral q; A_B = q A_g.'),
+    limbDarkening: parameterQuantity.default({ min: 0.45, max: 0.75 }).describe('Linear limb-darkening coefficient u of the star (typical values).'),
+    gravityDarkening: parameterQuantity.default({ min: 0.3, max: 0.4 }).describe('Gravity-darkening coefficient g of the star (typical values).'),
+    planetClass: z.enum(['auto', 'giant', 'rocky']).default('auto').describe('Planet class for the cloud-free ceiling; auto decides from the radius.'),
+    samples: z.number().int().min(100).max(100_000).default(4000).describe('Number of nuisance draws.'),
+    gridNodes: z.number().int().min(16).max(4096).default(256).describe('Geometric-albedo grid nodes per draw.'),
+    seed: z.number().int().min(0).max(2 ** 31 - 1).default(1).describe('Seed of the random generator.'),
+  })
+  .strict();
+
+export const systemFileSchema = z
+  .object({
+    $schema: z.string().optional().describe('Path or URL of this JSON Schema, for editors.'),
+    name: z.string().min(1).max(200).describe('Name of the planet.'),
+    note: z.string().max(2000).optional().describe('Free text kept with the file (e.g. where the numbers come from).'),
+    band: bandSchema,
+    star: starSchema,
+    planet: planetSchema,
+    measurements: measurementsSchema,
+    assumptions: assumptionsSchema.default(assumptionsSchema.parse({})),
+  })
+  .strict();
+
+export type SystemFileInput = z.input<typeof systemFileSchema>;
+export type SystemFile = z.output<typeof systemFileSchema>;

@@ -1,0 +1,64 @@
+/** The readable terminal report of an interpretation (`hesper interpret FILE`). */
+import type { AlbedoPosterior } from '../inference/types.ts';
+import type { Summary } from '../inference/summary.ts';
+import { fmtSig, renderTable } from './table.ts';
+
+const ROWS: Array<[keyof AlbedoPosterior, string, number]> = [
+  ['geometricAlbedo', 'geometric albedo A_g', 3],
+  ['bondAlbedo', 'Bond albedo A_B', 3],
+  ['daysideTemperatureK', 'dayside temperature [K]', 4],
+  ['equilibriumTemperatureK', 'equilibrium temperature [K]', 4],
+  ['thermalDepthPpm', 'thermal depth [ppm]', 3],
+  ['reflectedDepthPpm', 'reflected depth [ppm]', 3],
+  ['thermalFraction', 'thermal share of depth', 2],
+  ['allReflectedGeometricAlbedo', 'A_g if all light were reflected', 3],
+];
+
+function summaryRow(label: string, s: Summary, digits: number): string[] {
+  const f = (x: number) => fmtSig(x, digits);
+  return [label, f(s.median), `${f(s.lower68)} - ${f(s.upper68)}`, `${f(s.lower95)} - ${f(s.upper95)}`, f(s.upperLimit95)];
+}
+
+export function posteriorTable(r: AlbedoPosterior): string {
+  const rows = ROWS.map(([key, label, digits]) => summaryRow(label, r[key] as Summary, digits));
+  return renderTable(['quantity', 'median', '68 % interval', '95 % interval', '95 % upper'], rows, ['left', 'right', 'right', 'right', 'right']);
+}
+
+export function sensitivityTable(r: AlbedoPosterior): string {
+  const rows = r.sensitivity.map((c) => [String(c.redistribution), String(c.phaseIntegral), fmtSig(c.geometricAlbedo.median), `${fmtSig(c.geometricAlbedo.lower68)} - ${fmtSig(c.geometricAlbedo.upper68)}`, fmtSig(c.geometricAlbedo.upperLimit95)]);
+  return renderTable(['eps', 'q', 'A_g median', '68 % interval', '95 % upper'], rows, ['right', 'right', 'right', 'right', 'right']);
+}
+
+export function massEffectsTable(r: AlbedoPosterior): string | undefined {
+  const m = r.massEffects;
+  if (!m) return undefined;
+  return renderTable(['predicted stellar signal', 'median', '68 % interval'], [
+    summaryRow('ellipsoidal semi-amplitude [ppm]', m.ellipsoidalPpm, 3).slice(0, 3),
+    summaryRow('beaming semi-amplitude [ppm]', m.beamingPpm, 3).slice(0, 3),
+    summaryRow('RV semi-amplitude [m/s]', m.rvSemiAmplitudeMs, 3).slice(0, 3),
+  ], ['left', 'right', 'right']);
+}
+
+export function bulletList(title: string, items: string[]): string {
+  if (items.length === 0) return `${title}: none`;
+  return [`${title}:`, ...items.map((i) => `  - ${i}`)].join('\n');
+}
+
+export function textReport(r: AlbedoPosterior): string {
+  const parts = [
+    `${r.name}: band ${r.band.id} (${r.band.minNm}-${r.band.maxNm} nm${r.band.approximate ? ', approximate' : ''}), ${r.band.weighting}-weighted`,
+    '',
+    posteriorTable(r),
+    '',
+    `signal detected at >= 3 sigma: ${r.detected ? 'yes' : 'no'}`,
+    '',
+    'sensitivity of A_g to the redistribution eps and phase integral q (fixed corners):',
+    sensitivityTable(r),
+  ];
+  const mass = massEffectsTable(r);
+  if (mass) parts.push('', mass);
+  parts.push('', bulletList('assumptions that drove the result', r.assumptions), '', bulletList('warnings', r.warnings));
+  const d = r.diagnostics;
+  parts.push('', `diagnostics: ${d.samples} draws x ${d.gridNodes} grid nodes, effective sample size ${fmtSig(d.effectiveSampleSize, 4)}, seed ${d.seed}, ${fmtSig(d.computeMs, 3)} ms`);
+  return parts.join('\n');
+}
