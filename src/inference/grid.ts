@@ -9,7 +9,17 @@ import type { Nuisance } from './nuisance.ts';
 import type { LogLikelihood } from './likelihood.ts';
 import { type DrawModel, type MassPrediction, type ModelSettings, drawModel, planetTable, predictMassEffects, thermalRatioRow } from './signal-model.ts';
 
+/** A bivariate Gaussian likelihood of (eclipse depth, phase amplitude) with correlated errors. */
+export interface DepthAmplitudeJoint {
+  depthPpm: number;
+  amplitudePpm: number;
+  /** Inverse covariance entries [a, b, c] of [[a, b], [b, c]]. */
+  inverse: [number, number, number];
+}
+
 export interface Likelihoods {
+  /** Replaces eclipseDepthPpm and phaseAmplitudePpm when their errors are correlated. */
+  depthAmplitude?: DepthAmplitudeJoint;
   eclipseDepthPpm?: LogLikelihood;
   phaseAmplitudePpm?: LogLikelihood;
   nightsideFluxPpm?: LogLikelihood;
@@ -51,7 +61,9 @@ export function runGrid(draws: Nuisance[], settings: ModelSettings, lik: Likelih
   const lnC = lnAlbedoFactors(nodes);
   const factor = lnC.map(Math.exp);
   const table = planetTable(settings);
-  const needNight = lik.phaseAmplitudePpm !== undefined || lik.nightsideFluxPpm !== undefined;
+  const joint = lik.depthAmplitude;
+  const needNight = lik.phaseAmplitudePpm !== undefined || lik.nightsideFluxPpm !== undefined || joint !== undefined;
+  const depthRow = new Float64Array(nodes);
   const logL = new Float64Array(nodes);
   let maxDepthPpm = -Infinity;
   let maxAmplitudePpm = -Infinity;
@@ -81,15 +93,15 @@ export function runGrid(draws: Nuisance[], settings: ModelSettings, lik: Likelih
     let prevDepth = -Infinity;
     for (let j = 0; j < nodes; j++) {
       const depth = agUnit[j]! * perAg + 1e6 * dayRow[j]!;
-      signal[j] = depth;
+      depthRow[j] = depth;
       if (depth > maxDepthPpm) maxDepthPpm = depth;
       if (depth < prevDepth) depthFalls[i] = 1;
       prevDepth = depth;
     }
-    if (eclipseDepthPpm) eclipseDepthPpm.accumulate(signal, logL, nodes);
+    if (eclipseDepthPpm) eclipseDepthPpm.accumulate(depthRow, logL, nodes);
     if (needNight) {
       thermalRatioRow(dm, table, dm.lnNightZeroK, lnC, nightRow);
-      if (phaseAmplitudePpm) {
+      if (phaseAmplitudePpm || joint) {
         const perAgAmp = 1e6 * dm.reflectedAmplitudePerAg * invQ;
         const thermalAmp = 1e6 * dm.sinI;
         for (let j = 0; j < nodes; j++) {
@@ -97,7 +109,15 @@ export function runGrid(draws: Nuisance[], settings: ModelSettings, lik: Likelih
           signal[j] = amplitude;
           if (amplitude > maxAmplitudePpm) maxAmplitudePpm = amplitude;
         }
-        phaseAmplitudePpm.accumulate(signal, logL, nodes);
+        if (phaseAmplitudePpm) phaseAmplitudePpm.accumulate(signal, logL, nodes);
+        if (joint) {
+          const [a, b, c] = joint.inverse;
+          for (let j = 0; j < nodes; j++) {
+            const x = depthRow[j]! - joint.depthPpm;
+            const y = signal[j]! - joint.amplitudePpm;
+            logL[j]! -= 0.5 * (a * x * x + 2 * b * x * y + c * y * y);
+          }
+        }
       }
       if (nightsideFluxPpm) {
         const perAgNight = 1e6 * dm.reflectedNightPerAg * invQ;

@@ -8,7 +8,21 @@ import type { Rng } from './random.ts';
 export function likelihoodsOf(s: SystemInput): Likelihoods {
   const lik: Likelihoods = {};
   const m = s.measurements;
+  const rho = m.depthAmplitudeCorrelation;
+  const depth = m.eclipseDepthPpm;
+  const amplitude = m.phaseAmplitudePpm;
+  const correlated = rho !== undefined && depth?.kind === 'normal' && amplitude?.kind === 'normal';
+  if (correlated) {
+    // Inverse of [[sd^2, rho sd sa], [rho sd sa, sa^2]] (common practice).
+    const det = depth.sigma ** 2 * amplitude.sigma ** 2 * (1 - rho * rho);
+    lik.depthAmplitude = {
+      depthPpm: depth.mean,
+      amplitudePpm: amplitude.mean,
+      inverse: [amplitude.sigma ** 2 / det, (-rho * depth.sigma * amplitude.sigma) / det, depth.sigma ** 2 / det],
+    };
+  }
   for (const key of ['eclipseDepthPpm', 'phaseAmplitudePpm', 'nightsideFluxPpm', 'daysideTemperatureK', 'ellipsoidalAmplitudePpm', 'beamingAmplitudePpm'] as const) {
+    if (correlated && (key === 'eclipseDepthPpm' || key === 'phaseAmplitudePpm')) continue;
     const d = m[key];
     if (d) lik[key] = logLikelihoodOf(d);
   }

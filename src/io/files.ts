@@ -6,6 +6,7 @@
 import { readFileSync, statSync } from 'node:fs';
 import path from 'node:path';
 import { inputError } from '../errors.ts';
+import { locateJsonError } from './json-locate.ts';
 
 /** Largest file hesper reads as an input (samples, response curves, light curves). */
 export const MAX_INPUT_FILE_BYTES = 256 * 1024 * 1024;
@@ -41,16 +42,9 @@ export function parseJsonText(fieldPath: string, text: string, label: string): u
   try {
     return JSON.parse(text);
   } catch (e) {
-    const msg = (e as Error).message;
-    const m = /position (\d+)/.exec(msg);
-    let where = '';
-    if (m) {
-      const pos = Number(m[1]);
-      const before = text.slice(0, pos);
-      const line = before.split('\n').length;
-      const col = pos - before.lastIndexOf('\n');
-      where = ` at line ${line}, column ${col}`;
-    }
-    throw inputError('invalid-input', fieldPath, `${label} is not valid JSON${where}: ${msg}`);
+    const place = locateJsonError(text);
+    const where = place ? ` at line ${place.line}, column ${place.column}` : '';
+    const near = place ? `: near ${JSON.stringify(text.slice(place.offset, place.offset + 20))}` : `: ${(e as Error).message}`;
+    throw inputError('invalid-input', fieldPath, `${label} is not valid JSON${where}${near}`);
   }
 }

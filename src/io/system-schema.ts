@@ -53,6 +53,8 @@ export const measurementsSchema = z
     phaseOffsetDeg: opt(measurementQuantity, 'Phase-curve peak offset [deg]; positive = eastward, peak before eclipse.'),
     ellipsoidalAmplitudePpm: opt(measurementQuantity, 'Ellipsoidal semi-amplitude [ppm].'),
     beamingAmplitudePpm: opt(measurementQuantity, 'Doppler-beaming semi-amplitude [ppm].'),
+    depthAmplitudeCorrelation: z.number().gt(-1).lt(1).optional()
+      .describe('Correlation coefficient of eclipseDepthPpm and phaseAmplitudePpm when both come from one fit (both {value, sigma}).'),
   })
   .strict();
 

@@ -20,7 +20,10 @@ export interface SystemInput {
   band: Band;
   star: Fields<typeof STAR_FIELDS> & { teffK: Dist; metallicityDex: number };
   planet: Fields<typeof PLANET_FIELDS>;
-  measurements: Omit<Fields<typeof MEASUREMENT_FIELDS>, 'phaseSemiAmplitudePpm'>;
+  measurements: Omit<Fields<typeof MEASUREMENT_FIELDS>, 'phaseSemiAmplitudePpm'> & {
+    /** Correlation of the depth and phase-amplitude errors (both Gaussian), when given. */
+    depthAmplitudeCorrelation?: number;
+  };
   assumptions: Omit<SystemFile['assumptions'], keyof typeof ASSUMPTION_FIELDS> & {
     redistribution: Dist; phaseIntegral: Dist; limbDarkening: Dist; gravityDarkening: Dist;
   };
@@ -67,7 +70,7 @@ function readBand(spec: SystemFile['band'], issues: Issue[], opts: ParseOptions)
         return undefined;
       }
       const text = opts.readText('band.responseFile', spec.responseFile);
-      return resolveBand({ response: parseResponseCsv(text, spec.responseFile) }, 'band');
+      return resolveBand({ response: parseResponseCsv(text, spec.responseFile), source: spec.responseFile }, 'band');
     }
     return resolveBand(spec as BandSpec, 'band');
   } catch (e) {
@@ -119,13 +122,22 @@ export function parseSystem(json: unknown, opts: ParseOptions = {}): SystemInput
   const planet = convertGroup('planet', PLANET_FIELDS, f.planet, issues, opts);
   const m = convertGroup('measurements', MEASUREMENT_FIELDS, f.measurements, issues, opts);
   const a = convertGroup('assumptions', ASSUMPTION_FIELDS, f.assumptions, issues, opts);
-  const { phaseSemiAmplitudePpm, ...measurements } = m;
+  const { phaseSemiAmplitudePpm, ...converted } = m;
+  const measurements: SystemInput['measurements'] = converted;
   if (phaseSemiAmplitudePpm) {
     if (measurements.phaseAmplitudePpm) {
       issues.push({ path: 'measurements.phaseSemiAmplitudePpm', message: 'give phaseAmplitudePpm (peak-to-trough) or phaseSemiAmplitudePpm, not both' });
     } else {
       measurements.phaseAmplitudePpm = scale(phaseSemiAmplitudePpm, 2);
       notes.push('phaseSemiAmplitudePpm was doubled to a peak-to-trough phaseAmplitudePpm.');
+    }
+  }
+  const rho = f.measurements.depthAmplitudeCorrelation;
+  if (rho !== undefined) {
+    if (measurements.eclipseDepthPpm?.kind !== 'normal' || measurements.phaseAmplitudePpm?.kind !== 'normal') {
+      issues.push({ path: 'measurements.depthAmplitudeCorrelation', message: 'needs eclipseDepthPpm and phaseAmplitudePpm both given as {value, sigma}' });
+    } else {
+      measurements.depthAmplitudeCorrelation = rho;
     }
   }
   if (issues.length === 0 && band && star.teffK && a.redistribution && a.phaseIntegral && a.limbDarkening && a.gravityDarkening) {

@@ -171,19 +171,6 @@ export function pairsSupportNm(pairs: ReadonlyArray<readonly [number, number]>):
   return { minNm: pairs[lo]![0], maxNm: pairs[hi]![0] };
 }
 
-/** The same coverage from an SI curve [nm] (subject to the m -> nm rounding). */
-export function curveSupportNm(curve: ResponseCurve): { minNm: number; maxNm: number } {
-  const { lo, hi } = supportIndices(curve.weight);
-  return { minNm: curve.wavelengthM[lo]! * 1e9, maxNm: curve.wavelengthM[hi]! * 1e9 };
-}
-
-/** Peak weight of the curve. */
-export function curvePeak(curve: ResponseCurve): number {
-  let m = 0;
-  for (const w of curve.weight) if (w > m) m = w;
-  return m;
-}
-
 /** 64-bit content hash of the curve (two FNV-1a 32-bit passes with different offsets; common practice). */
 export function curveHash(curve: ResponseCurve): string {
   let h1 = 0x811c9dc5;

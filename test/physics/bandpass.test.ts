@@ -81,6 +81,11 @@ describe('band flux API', () => {
     expect(b).toBe(a);
     expect(getBandTable(a, 'photon')).toBe(getBandTable(b, 'photon'));
     expect(getBandTable(a, 'energy')).not.toBe(getBandTable(a, 'photon'));
+    // The same curve read from a named file keeps its own source but reuses the table.
+    const c = resolveBand({ response: curve, source: 'invented-curve.csv' });
+    expect(c.source).toBe('invented-curve.csv');
+    expect(getBandTable(c, 'photon')).toBe(getBandTable(a, 'photon'));
+    expect(resolveBand({ response: [[500, 0], [600, 1], [700, 0.5], [800, 0.1]] }).id).not.toBe(a.id);
   });
 
   it('is zero at 0 K, finite in log space where the flux underflows, and direct outside the table', () => {

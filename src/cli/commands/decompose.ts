@@ -12,12 +12,15 @@ import { Option } from 'commander';
 import { inputError } from '../../errors.ts';
 import { readCurveCsv } from '../../io/curve-csv.ts';
 import { decompose, type Decomposition } from '../../lightcurve/decompose.ts';
+import { loadSystemFile } from '../../io/system-file.ts';
+import { type CurveOptions, decomposeWithSystem } from '../curve-route.ts';
 import type { EclipseGeometry, PhaseModel, ValueSigma } from '../../lightcurve/types.ts';
 import type { CliIo } from '../io.ts';
 import { intOption, numberOption } from '../options.ts';
 
 interface DecomposeCliOptions {
-  period: number;
+  period?: number;
+  system?: string;
   epoch?: number;
   radiusRatio?: number;
   scaledSemiMajorAxis?: number;
@@ -87,7 +90,8 @@ export function registerDecompose(program: Command, io: CliIo): void {
     .command('decompose')
     .description("Fold a light curve and separate the planet's phase term and eclipse from the star's ellipsoidal and beaming signals")
     .argument('<curve>', 'CSV with a header time,flux,flux_err (days) or phase,flux,flux_err (folded); # lines are comments')
-    .requiredOption('--period <days>', 'orbital period [days]', numberOption('period'))
+    .option('--period <days>', 'orbital period [days] (default with --system: planet.periodDays)', numberOption('period'))
+    .option('--system <file>', 'system file: geometry, period and the predicted ellipsoidal and beaming signals come from it')
     .option('--epoch <bjd>', 'mid-transit time [days, same system as the time column]; not needed for a folded curve', numberOption('epoch'))
     .option('--radius-ratio <k>', 'Rp/R*', numberOption('radius-ratio'))
     .option('--scaled-semi-major-axis <a>', 'a/R*', numberOption('scaled-semi-major-axis'))
@@ -103,22 +107,7 @@ export function registerDecompose(program: Command, io: CliIo): void {
     .option('--json', 'print the decomposition JSON instead of the readable report')
     .addHelpText('after', HELP_AFTER)
     .action((file: string, opts: DecomposeCliOptions) => {
-      const geometry = geometryFrom(opts);
-      const curve = readCurveCsv(io.cwd, file);
-      if (curve.column === 'phase' && opts.epoch !== undefined) io.err('note: --epoch is not used: the curve is already folded');
-      const result = decompose(curve, {
-        periodDays: opts.period,
-        ...(opts.epoch !== undefined ? { epochDays: opts.epoch } : {}),
-        geometry,
-        phaseModel: opts.phaseModel,
-        fitOffset: opts.offset ?? false,
-        ...(opts.bins !== undefined ? { bins: opts.bins } : {}),
-        predicted: {
-          ...(opts.predictedBeaming ? { beamingPpm: opts.predictedBeaming } : {}),
-          ...(opts.predictedEllipsoidal ? { ellipsoidalPpm: opts.predictedEllipsoidal } : {}),
-        },
-        scaleErrors: opts.scaleErrors ?? false,
-      });
+      const result = opts.system ? fromSystem(file, opts, io) : fromOptions(file, opts, io);
       if (opts.systemOut) {
         const target = path.resolve(io.cwd, opts.systemOut);
         try {
@@ -130,6 +119,41 @@ export function registerDecompose(program: Command, io: CliIo): void {
       }
       io.out(opts.json ? JSON.stringify(result, null, 2) : textReport(file, result));
     });
+}
+
+function fromSystem(file: string, opts: DecomposeCliOptions, io: CliIo): Decomposition {
+  for (const [flag, v] of [['--radius-ratio', opts.radiusRatio], ['--scaled-semi-major-axis', opts.scaledSemiMajorAxis], ['--inclination', opts.inclination], ['--duration', opts.duration]] as const) {
+    if (v !== undefined) throw inputError('invalid-input', flag, `${flag} and --system both give the geometry: use one`);
+  }
+  if (opts.predictedBeaming || opts.predictedEllipsoidal) {
+    throw inputError('invalid-input', '--system', 'with --system the predicted signals come from the system masses; drop --predicted-beaming / --predicted-ellipsoidal');
+  }
+  const system = loadSystemFile(opts.system!, io.cwd);
+  const curveOptions: CurveOptions = { phaseModel: opts.phaseModel, offset: opts.offset ?? false };
+  if (opts.period !== undefined) curveOptions.period = opts.period;
+  if (opts.epoch !== undefined) curveOptions.epoch = opts.epoch;
+  if (opts.bins !== undefined) curveOptions.bins = opts.bins;
+  return decomposeWithSystem(system, file, curveOptions, io);
+}
+
+function fromOptions(file: string, opts: DecomposeCliOptions, io: CliIo): Decomposition {
+  if (opts.period === undefined) throw inputError('invalid-input', '--period', 'missing: give --period DAYS (or --system FILE with planet.periodDays)');
+  const geometry = geometryFrom(opts);
+  const curve = readCurveCsv(io.cwd, file);
+  if (curve.column === 'phase' && opts.epoch !== undefined) io.err('note: --epoch is not used: the curve is already folded');
+  return decompose(curve, {
+    periodDays: opts.period,
+    ...(opts.epoch !== undefined ? { epochDays: opts.epoch } : {}),
+    geometry,
+    phaseModel: opts.phaseModel,
+    fitOffset: opts.offset ?? false,
+    ...(opts.bins !== undefined ? { bins: opts.bins } : {}),
+    predicted: {
+      ...(opts.predictedBeaming ? { beamingPpm: opts.predictedBeaming } : {}),
+      ...(opts.predictedEllipsoidal ? { ellipsoidalPpm: opts.predictedEllipsoidal } : {}),
+    },
+    scaleErrors: opts.scaleErrors ?? false,
+  });
 }
 
 const round = (x: number): number => Number(x.toPrecision(4));

@@ -3,7 +3,7 @@ import { readdirSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
 import path from 'node:path';
 import type { Command } from 'commander';
-import { inferAlbedo } from '../../inference/infer.ts';
+import { interpretSystem } from '../../interpret/run.ts';
 import { loadSystemFile } from '../../io/system-file.ts';
 import { textReport } from '../../report/text-report.ts';
 import type { CliIo } from '../io.ts';
@@ -22,7 +22,7 @@ export function registerDemo(program: Command, io: CliIo): void {
       const files = demoSystemFiles();
       io.out(`hesper demo: ${files.length} invented systems from demo-data/systems (not real planets)\n`);
       for (const file of files) {
-        const result = inferAlbedo(loadSystemFile(file, io.cwd));
+        const result = interpretSystem(loadSystemFile(file, io.cwd));
         io.out(`${'='.repeat(78)}\n${path.relative(io.cwd, file)}\n${textReport(result)}\n`);
       }
     });

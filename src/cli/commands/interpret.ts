@@ -1,6 +1,6 @@
 /** `hesper interpret FILE`: the albedo posterior of one system file. */
 import type { Command } from 'commander';
-import { inferAlbedo } from '../../inference/infer.ts';
+import { interpretSystem } from '../../interpret/run.ts';
 import { loadSystemFile } from '../../io/system-file.ts';
 import { textReport } from '../../report/text-report.ts';
 import type { CliIo } from '../io.ts';
@@ -22,7 +22,7 @@ export function registerInterpret(program: Command, io: CliIo): void {
     .option('--seed <s>', 'seed of the random generator (default: the file, else 1)', intOption('seed', 0, 2 ** 31 - 1))
     .action((file: string, opts: InterpretOptions) => {
       const system = loadSystemFile(file, io.cwd);
-      const result = inferAlbedo(system, {
+      const result = interpretSystem(system, {
         ...(opts.samples !== undefined ? { samples: opts.samples } : {}),
         ...(opts.seed !== undefined ? { seed: opts.seed } : {}),
       });
