@@ -14,6 +14,11 @@ export function describeDist(d: Dist, digits = 3): string {
   }
 }
 
+/** "400-1050" for a band's coverage in nm, without floating-point noise. */
+export function bandRangeNm(band: { minNm: number; maxNm: number }): string {
+  return `${Number(band.minNm.toPrecision(6))}-${Number(band.maxNm.toPrecision(6))}`;
+}
+
 export function assumptionLines(s: SystemInput): string[] {
   const a = s.assumptions;
   const lines: string[] = [];
@@ -25,7 +30,7 @@ export function assumptionLines(s: SystemInput): string[] {
   }
   lines.push(`Bond albedo A_B = q A_g with phase integral q ${describeDist(a.phaseIntegral)}; a band geometric albedo stands in for the bolometric one.`);
   lines.push('Lambert phase function; uniform prior on A_g over [0, 1/q] (energy conservation A_B <= 1).');
-  lines.push(`Band "${s.band.id}" (${s.band.minNm}-${s.band.maxNm} nm${s.band.approximate ? ', approximate shape' : ''}), integrals weighted per ${a.weighting}.`);
+  lines.push(`Band "${s.band.id}" (${bandRangeNm(s.band)} nm${s.band.approximate ? ', approximate shape' : ''}), integrals weighted per ${a.weighting}.`);
   if (s.measurements.daysideTemperatureK) lines.push('The measured dayside brightness temperature is compared with the model dayside temperature directly.');
   if (s.planet.massMjup || s.planet.massMearth) {
     lines.push(`Mass effects: limb darkening u ${describeDist(a.limbDarkening)}, gravity darkening g ${describeDist(a.gravityDarkening)} (typical values).`);

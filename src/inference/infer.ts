@@ -16,8 +16,8 @@ import { type Nuisance, drawNuisance } from './nuisance.ts';
 import { createRng, type Rng } from './random.ts';
 import { samplePosterior } from './sample-posterior.ts';
 import type { ModelSettings } from './signal-model.ts';
-import { roundSig, summarize } from './summary.ts';
-import type { AlbedoPosterior, MassEffects, SensitivityRow } from './types.ts';
+import { quantileSorted, roundSig, summarize } from './summary.ts';
+import type { AlbedoPosterior, InferenceResult, MassEffects, PosteriorQuantiles, SensitivityRow } from './types.ts';
 import { posteriorWarnings } from './warnings.ts';
 
 export interface InferOptions {
@@ -85,7 +85,23 @@ function massEffectsOf(grid: ReturnType<typeof runGrid>, drawIndex: Int32Array):
   return { ellipsoidalPpm: summarize(e), beamingPpm: summarize(b), rvSemiAmplitudeMs: summarize(k) };
 }
 
+/** Points of each quantile grid in PosteriorQuantiles: a CDF resolution of 0.001. */
+export const QUANTILE_GRID_POINTS = 1001;
+
+function quantileGrid(values: Float64Array): Float64Array {
+  const sorted = Float64Array.from(values).sort();
+  const grid = new Float64Array(QUANTILE_GRID_POINTS);
+  for (let k = 0; k < QUANTILE_GRID_POINTS; k++) grid[k] = quantileSorted(sorted, k / (QUANTILE_GRID_POINTS - 1));
+  return grid;
+}
+
+/** The albedo posterior (the JSON contract's fields). */
 export function inferAlbedo(s: SystemInput, options: InferOptions = {}): AlbedoPosterior {
+  return inferAlbedoDetailed(s, options).posterior;
+}
+
+/** The albedo posterior plus quantile grids of A_g, T_day and T_eq for the interpretation. */
+export function inferAlbedoDetailed(s: SystemInput, options: InferOptions = {}): InferenceResult {
   const t0 = performance.now();
   const samples = options.samples ?? s.assumptions.samples;
   const nodes = options.gridNodes ?? s.assumptions.gridNodes;
@@ -110,7 +126,7 @@ export function inferAlbedo(s: SystemInput, options: InferOptions = {}): AlbedoP
 
   const result: AlbedoPosterior = {
     name: s.name,
-    band: { id: s.band.id, label: s.band.label, minNm: s.band.minNm, maxNm: s.band.maxNm, approximate: s.band.approximate, weighting: s.assumptions.weighting },
+    band: { id: s.band.id, label: s.band.label, minNm: roundSig(s.band.minNm, 6), maxNm: roundSig(s.band.maxNm, 6), approximate: s.band.approximate, weighting: s.assumptions.weighting },
     geometricAlbedo: summarize(post.geometricAlbedo),
     bondAlbedo: summarize(post.bondAlbedo),
     daysideTemperatureK: summarize(post.daysideTemperatureK),
@@ -126,6 +142,11 @@ export function inferAlbedo(s: SystemInput, options: InferOptions = {}): AlbedoP
     diagnostics: { effectiveSampleSize: roundSig(ess, 4), samples, gridNodes: nodes, seed, computeMs: 0 },
     warnings: posteriorWarnings({ system: s, grid, posterior: post, thermalFraction, ...(massEffects ? { massEffects } : {}), effectiveSampleSize: ess }),
   };
+  const quantiles: PosteriorQuantiles = {
+    geometricAlbedo: quantileGrid(post.geometricAlbedo),
+    daysideTemperatureK: quantileGrid(post.daysideTemperatureK),
+    equilibriumTemperatureK: quantileGrid(post.equilibriumTemperatureK),
+  };
   result.diagnostics.computeMs = roundSig(performance.now() - t0, 3);
-  return result;
+  return { posterior: result, quantiles };
 }

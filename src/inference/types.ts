@@ -40,3 +40,20 @@ export interface AlbedoPosterior {
   diagnostics: Diagnostics;
   warnings: string[];
 }
+
+/**
+ * Posterior marginals as sorted quantile grids: values[k] is the k/(n-1) quantile
+ * (Hyndman & Fan type 7 over the posterior draws). Handed to the interpretation for
+ * probabilities such as P(A_g > x); not part of the JSON contract.
+ */
+export interface PosteriorQuantiles {
+  geometricAlbedo: Float64Array;
+  daysideTemperatureK: Float64Array;
+  equilibriumTemperatureK: Float64Array;
+}
+
+/** The posterior with its quantile grids (inferAlbedoDetailed). */
+export interface InferenceResult {
+  posterior: AlbedoPosterior;
+  quantiles: PosteriorQuantiles;
+}

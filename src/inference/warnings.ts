@@ -1,5 +1,6 @@
 /** Warnings users need when reading an albedo posterior (issue on the main job, item 3). */
 import type { SystemInput } from '../io/system.ts';
+import { bandRangeNm } from './assumptions.ts';
 import type { GridResult } from './grid.ts';
 import { centreAndWidth } from './measurements.ts';
 import type { PosteriorDraws } from './sample-posterior.ts';
@@ -55,7 +56,7 @@ export function posteriorWarnings(w: WarningInput): string[] {
     out.push(`Low effective sample size (${fmt(w.effectiveSampleSize, 0)} of ${n} draws): the measurements constrain the nuisance parameters strongly; raise assumptions.samples for stable intervals.`);
   }
   if (s.band.approximate) {
-    out.push(`The band "${s.band.id}" is approximated (${s.band.minNm}-${s.band.maxNm} nm, shape from its coverage only); give a tabulated response curve for precise thermal estimates.`);
+    out.push(`The band "${s.band.id}" is approximated (${bandRangeNm(s.band)} nm, shape from its coverage only); give a tabulated response curve for precise thermal estimates.`);
   }
   if (s.planet.inclinationDeg === undefined) out.push('No inclination given: an edge-on orbit (i = 90 deg) was assumed.');
   if (m.phaseOffsetDeg) out.push('The phase offset does not enter the albedo posterior; it is used when the result is interpreted.');

@@ -65,3 +65,22 @@ export function tableLogFlux(table: BandTable, lnT: number): number {
   // Cubic Hermite basis (common practice).
   return (1 + 2 * t) * u * u * y0 + t * u * u * m0 + t * t * (3 - 2 * t) * y1 - t * t * u * m1;
 }
+
+/**
+ * d ln F / d ln T from the table: the derivative of the same cubic Hermite interpolant
+ * (common practice), used for the band-averaged beaming factor in hot loops.
+ */
+export function tableLogSlope(table: BandTable, lnT: number): number {
+  const s = (lnT - table.lnT0) * table.invStep;
+  const last = table.lnFlux.length - 2;
+  let i = Math.floor(s);
+  if (i < 0) i = 0;
+  else if (i > last) i = last;
+  const t = s - i;
+  const y0 = table.lnFlux[i]!;
+  const y1 = table.lnFlux[i + 1]!;
+  const m0 = table.tangent[i]!;
+  const m1 = table.tangent[i + 1]!;
+  const dpdt = (6 * t * t - 6 * t) * (y0 - y1) + (3 * t * t - 4 * t + 1) * m0 + (3 * t * t - 2 * t) * m1;
+  return dpdt * table.invStep;
+}

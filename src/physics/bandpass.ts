@@ -5,7 +5,7 @@
  */
 import { inputError } from '../errors.ts';
 import { bandMoments } from './band-integral.ts';
-import { TABLE_MAX_K, TABLE_MIN_K, buildBandTable, tableLogFlux, type BandTable } from './band-table.ts';
+import { TABLE_MAX_K, TABLE_MIN_K, buildBandTable, tableLogFlux, tableLogSlope, type BandTable } from './band-table.ts';
 import { BUILTIN_BAND_DEFS, type BandShape, type Provenance } from './bands-builtin.ts';
 import { requireWeighting, type Weighting } from './planck.ts';
 import {
@@ -201,6 +201,15 @@ export function logBandFlux(band: Band, temperatureK: number, weighting: Weighti
   requireWeighting('weighting', weighting);
   if (temperatureK === 0) return -Infinity;
   return bandMoments(band.response, temperatureK, weighting).logFlux;
+}
+
+/** d ln F_band / d ln T (the band-weighted mean of x e^x / (e^x - 1)): table inside its range, direct outside. */
+export function bandLogSlope(band: Band, temperatureK: number, weighting: Weighting = 'photon'): number {
+  if (!(temperatureK > 0 && temperatureK < Infinity)) badTemperature('temperatureK', temperatureK);
+  if (temperatureK >= TABLE_MIN_K && temperatureK <= TABLE_MAX_K) {
+    return tableLogSlope(getBandTable(band, weighting), Math.log(temperatureK));
+  }
+  return bandMoments(band.response, temperatureK, requireWeighting('weighting', weighting)).logSlope;
 }
 
 /**

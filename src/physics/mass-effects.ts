@@ -12,8 +12,7 @@
  *   alpha_ellip = 0.15 (15 + u)(1 + g) / (3 - u). Signal ~ -cos(4 pi phi).
  */
 import { requireInRange, requireNonNegative, requirePositive } from '../errors.ts';
-import { bandMoments } from './band-integral.ts';
-import type { Band } from './bandpass.ts';
+import { bandLogSlope, type Band } from './bandpass.ts';
 import { C_M_PER_S, G_SI } from './constants.ts';
 import { requireInclination, requireScaledSemiMajorAxis } from './guards.ts';
 import { planckLogTemperatureSlope } from './planck.ts';
@@ -52,7 +51,7 @@ export function beamingFactorAtWavelength(teffK: number, wavelengthM: number): n
  */
 export function beamingFactor(teffK: number, band: Band): number {
   requirePositive('teffK', teffK);
-  return bandMoments(band.response, teffK, 'photon').logSlope / 4;
+  return bandLogSlope(band, teffK, 'photon') / 4;
 }
 
 /** Beaming semi-amplitude alpha_beam 4 K / c (fraction). */
