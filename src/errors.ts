@@ -120,6 +120,34 @@ export const ERROR_CODES = {
     meaning: 'The database file is not a hesper catalog, or was written by a newer hesper with migrations this one lacks.',
     fix: 'Point --db or HESPER_DB at another file, or update hesper; the file was not changed.',
   },
+  'bad-json': {
+    meaning: 'An HTTP request body is not valid JSON.',
+    fix: 'Send one JSON value (UTF-8) with Content-Type: application/json; the message gives the position of the first fault.',
+  },
+  'unsupported-media-type': {
+    meaning: 'An HTTP request body has a content type the route does not take.',
+    fix: 'Send the body as JSON with the header Content-Type: application/json.',
+  },
+  'payload-too-large': {
+    meaning: 'An HTTP request body is larger than the server accepts (1 MB).',
+    fix: 'Send a smaller body: thin long sample lists or response curves; use `hesper interpret` or `hesper batch` for large inputs.',
+  },
+  'unknown-route': {
+    meaning: 'No HTTP route has this method and path.',
+    fix: 'See GET /api/openapi.json for the routes and their methods.',
+  },
+  'bad-host': {
+    meaning: "An HTTP request names a Host the server does not answer for (a guard against DNS rebinding of the loopback server).",
+    fix: 'Open the page at the address `hesper serve` printed (http://127.0.0.1:PORT or http://localhost:PORT).',
+  },
+  'cannot-listen': {
+    meaning: 'The server could not listen on the host and port given (the port is in use, or the host is not an address of this machine).',
+    fix: 'Choose another --port (0 picks a free one) or a --host this machine has (127.0.0.1 by default).',
+  },
+  'bad-batch-csv': {
+    meaning: 'A batch CSV file has a malformed header (unknown, repeated or unpaired columns) or no rows.',
+    fix: 'Correct the header as listed in `hesper batch --help`; rows with bad values are reported in the error column instead.',
+  },
   'internal': {
     meaning: 'An unexpected failure inside hesper.',
     fix: 'Report it with the input that caused it; no data was changed.',

@@ -21,7 +21,7 @@ export function formatError(e: HesperError): string {
 
 /** Runs the CLI on argv (without "node" and the script) and returns the exit code. */
 export async function main(argv: string[], io: CliIo = processIo()): Promise<number> {
-  const program = buildProgram(io);
+  const program = await buildProgram(io, argv);
   try {
     await program.parseAsync(argv, { from: 'user' });
     return EXIT_OK;

@@ -4,12 +4,16 @@
  * from constants.ts so that there is one table of values. Physics functions never
  * parse strings: callers convert once with toSi / convertValue.
  */
-import { create, all, type MathJsInstance, type Unit } from 'mathjs';
+import { createRequire } from 'node:module';
+import type { MathJsInstance, Unit } from 'mathjs';
 import { inputError } from '../errors.ts';
 import { KG_PER_MEARTH, KG_PER_MJUP, KG_PER_MSUN, M_PER_AU, M_PER_REARTH, M_PER_RJUP, M_PER_RSUN } from './constants.ts';
 
-// mathjs types declare `all` through a Record, so it reads as possibly undefined under noUncheckedIndexedAccess.
-const math: MathJsInstance = create(all!, {});
+// mathjs ships a single-file build next to its module tree; it loads in about a tenth
+// of the time (70 ms against 500 ms here), which matters for every CLI start. Its
+// default instance is private to this module: nothing else in hesper uses mathjs.
+const require = createRequire(import.meta.url);
+const math = require('mathjs/lib/browser/math.js') as MathJsInstance;
 
 // mathjs unit names must be alphanumeric. mathjs already knows "au" as a length, but
 // with its own value; we override it so that every unit comes from constants.ts.

@@ -1,0 +1,195 @@
+/**
+ * zod schemas of the catalog-entry JSON format (DESIGN.md section 7) and of source
+ * records. Used by `catalog add`, the HTTP API, CSV import and the seed loader, so
+ * every way into the catalog applies the same rules as the database CHECKs.
+ */
+import { z } from 'zod';
+import {
+  CATEGORIES,
+  ENTRY_ID_PATTERN,
+  ORIGINS,
+  PROVENANCES,
+  QUANTITIES,
+  SOURCE_KEY_PATTERN,
+  SOURCE_TYPES,
+} from './vocab.ts';
+
+const optionalText = (max: number) => z.string().trim().min(1).max(max).nullable().optional();
+const optionalCode = z
+  .union([z.string().trim().min(1).max(60), z.number().int().nonnegative()])
+  .transform((v) => String(v))
+  .nullable()
+  .optional();
+
+function bracesBalanced(text: string): boolean {
+  let depth = 0;
+  for (const ch of text) {
+    if (ch === '{') depth++;
+    else if (ch === '}' && --depth < 0) return false;
+  }
+  return depth === 0;
+}
+
+export const sourceKeySchema = z
+  .string()
+  .regex(SOURCE_KEY_PATTERN, 'a source key starts with a letter and has only letters, digits and _ : . + - (at most 80 characters)');
+
+/**
+ * A bibliographic record. `authors` uses BibTeX name-list syntax: names joined by
+ * " and ", each "Last, First" (or "First Last"), a corporate name in braces
+ * ("{NASA Space Science Data Coordinated Archive}"), "others" for et al. Text is plain
+ * Unicode; the BibTeX writer does the LaTeX escaping.
+ */
+export const sourceRecordSchema = z
+  .object({
+    key: sourceKeySchema,
+    type: z.enum(SOURCE_TYPES).default('article'),
+    authors: z
+      .string()
+      .trim()
+      .min(1)
+      .max(4000)
+      .refine(bracesBalanced, 'braces in authors must be balanced (use them only around a corporate name)'),
+    year: z.number().int().min(1600).max(2200).nullable().optional(),
+    title: z.string().trim().min(1).max(1000),
+    journal: optionalText(300),
+    publisher: optionalText(300),
+    volume: optionalCode,
+    pages: optionalCode,
+    doi: z
+      .string()
+      .trim()
+      .regex(/^10\.\d{4,9}\/\S+$/, 'a DOI looks like 10.1234/abc (without https://doi.org/)')
+      .nullable()
+      .optional(),
+    arxiv: z
+      .string()
+      .trim()
+      .regex(/^(\d{4}\.\d{4,5}|[a-z-]+(\.[A-Z]{2})?\/\d{7})(v\d+)?$/, 'an arXiv id looks like 1609.05048 or astro-ph/9910504')
+      .nullable()
+      .optional(),
+    url: z
+      .string()
+      .trim()
+      .regex(/^https?:\/\/[^\s{}]+$/, 'a URL starts with http:// or https:// and has no spaces or braces')
+      .nullable()
+      .optional(),
+    note: optionalText(4000),
+    /** Accepted so exported records can be re-added; new records are always user rows. */
+    origin: z.enum(ORIGINS).optional(),
+  })
+  .strict();
+
+const finite = z.number();
+const nonNegative = finite.min(0, 'must be >= 0');
+const positive = finite.positive('must be > 0');
+
+const spectrumPointSchema = z.object({ wavelengthNm: positive, value: nonNegative }).strict();
+
+/** The fields every entry shape shares; `sources` differs between users and seeds. */
+const entryFields = {
+  id: z.string().regex(ENTRY_ID_PATTERN, 'an id is a slug: lower-case letters, digits and inner hyphens, at most 80 characters'),
+  name: z.string().trim().min(1).max(200),
+  category: z.enum(CATEGORIES),
+  quantity: z.enum(QUANTITIES),
+  bandMinNm: positive,
+  bandMaxNm: positive,
+  valueMin: nonNegative,
+  valueNominal: nonNegative,
+  valueMax: nonNegative,
+  temperatureMinK: nonNegative.nullable().default(null),
+  temperatureMaxK: positive.nullable().default(null),
+  condensate: z.string().trim().min(1).max(60).nullable().default(null),
+  description: z.string().max(4000).default(''),
+  provenance: z.enum(PROVENANCES),
+  spectrum: z.array(spectrumPointSchema).max(10000).default([]),
+  /** Accepted so exported entries can be re-added; entries added are always user rows. */
+  origin: z.enum(ORIGINS).optional(),
+};
+
+interface CrossFields {
+  quantity: string;
+  bandMinNm: number;
+  bandMaxNm: number;
+  valueMin: number;
+  valueNominal: number;
+  valueMax: number;
+  temperatureMinK: number | null;
+  temperatureMaxK: number | null;
+  spectrum: { wavelengthNm: number }[];
+  sources: (string | { key: string })[];
+}
+
+/** Rules between fields, mirroring the CHECK constraints of schema.ts. */
+function checkCrossFields(e: CrossFields, ctx: z.RefinementCtx): void {
+  const say = (path: string, message: string) => ctx.addIssue({ code: 'custom', path: [path], message });
+  if (e.bandMinNm >= e.bandMaxNm) say('bandMaxNm', `bandMaxNm = ${e.bandMaxNm} must be greater than bandMinNm = ${e.bandMinNm}`);
+  if (e.valueMin > e.valueMax) say('valueMin', `valueMin = ${e.valueMin} must not exceed valueMax = ${e.valueMax}`);
+  else if (e.valueNominal < e.valueMin || e.valueNominal > e.valueMax) {
+    say('valueNominal', `valueNominal = ${e.valueNominal} must lie in [valueMin, valueMax] = [${e.valueMin}, ${e.valueMax}]`);
+  }
+  if (e.quantity !== 'geometric' && e.valueMax > 1) {
+    say('valueMax', `valueMax = ${e.valueMax}: a ${e.quantity} albedo cannot exceed 1 (only a geometric albedo can)`);
+  }
+  if (e.temperatureMinK !== null && e.temperatureMaxK !== null && e.temperatureMinK > e.temperatureMaxK) {
+    say('temperatureMinK', `temperatureMinK = ${e.temperatureMinK} must not exceed temperatureMaxK = ${e.temperatureMaxK}`);
+  }
+  const seen = new Set<number>();
+  e.spectrum.forEach((p, i) => {
+    if (seen.has(p.wavelengthNm)) ctx.addIssue({ code: 'custom', path: ['spectrum', i, 'wavelengthNm'], message: `wavelength ${p.wavelengthNm} nm appears twice` });
+    seen.add(p.wavelengthNm);
+  });
+  const keys = new Set<string>();
+  e.sources.forEach((s, i) => {
+    const key = typeof s === 'string' ? s : s.key;
+    if (keys.has(key)) ctx.addIssue({ code: 'custom', path: ['sources', i], message: `source ${key} is cited twice` });
+    keys.add(key);
+  });
+}
+
+/** A catalog entry as users and the API give it: sources are keys or full records. */
+export const catalogEntryInputSchema = z
+  .object({
+    ...entryFields,
+    sources: z.array(z.union([sourceKeySchema, sourceRecordSchema])).min(1, 'at least one source is required'),
+  })
+  .strict()
+  .superRefine(checkCrossFields);
+
+/** A curated entry in seeds/*.json: sources are keys of the seed source records. */
+export const seedEntrySchema = z
+  .object({
+    ...entryFields,
+    sources: z.array(sourceKeySchema).min(1, 'at least one source is required'),
+  })
+  .strict()
+  .superRefine(checkCrossFields);
+
+/** A partial update of a user entry (any field but the id); checked again after merging. */
+export const catalogEntryPatchSchema = z
+  .object({
+    name: entryFields.name,
+    category: entryFields.category,
+    quantity: entryFields.quantity,
+    bandMinNm: entryFields.bandMinNm,
+    bandMaxNm: entryFields.bandMaxNm,
+    valueMin: entryFields.valueMin,
+    valueNominal: entryFields.valueNominal,
+    valueMax: entryFields.valueMax,
+    temperatureMinK: nonNegative.nullable(),
+    temperatureMaxK: positive.nullable(),
+    condensate: z.string().trim().min(1).max(60).nullable(),
+    description: z.string().max(4000),
+    provenance: entryFields.provenance,
+    spectrum: z.array(spectrumPointSchema).max(10000),
+    sources: z.array(z.union([sourceKeySchema, sourceRecordSchema])).min(1, 'at least one source is required'),
+  })
+  .partial()
+  .strict();
+
+export type SourceRecordInput = z.input<typeof sourceRecordSchema>;
+export type SourceRecordParsed = z.output<typeof sourceRecordSchema>;
+export type CatalogEntryInput = z.input<typeof catalogEntryInputSchema>;
+export type CatalogEntryParsed = z.output<typeof catalogEntryInputSchema>;
+export type SeedEntryParsed = z.output<typeof seedEntrySchema>;
+export type CatalogEntryPatch = z.input<typeof catalogEntryPatchSchema>;
