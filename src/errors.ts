@@ -76,6 +76,10 @@ export const ERROR_CODES = {
     meaning: 'A file named in the input could not be read, or is not a regular file.',
     fix: 'Check the path (relative paths resolve against the system file) and the permissions.',
   },
+  'file-unwritable': {
+    meaning: 'An output file could not be written (missing folder, no permission, or it is the input file).',
+    fix: 'Check the output path and its folder; give an output file other than the input.',
+  },
   'bad-light-curve': {
     meaning: 'A light-curve CSV has a missing column, a non-numeric cell, a non-positive flux_err, a phase outside [-1, 1], or times that are not strictly increasing.',
     fix: 'Give a header time,flux,flux_err (or phase,flux,flux_err) and one row per point with strictly increasing times; lines starting with # are skipped; the message names the line.',
