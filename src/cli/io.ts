@@ -8,6 +8,8 @@ export interface CliIo {
   cwd: string;
   /** Environment (HESPER_DB and friends). */
   env: Record<string, string | undefined>;
+  /** The stream behind err, when there is one (a progress bar redraws in place on a terminal). */
+  errStream?: NodeJS.WriteStream;
 }
 
 export function processIo(): CliIo {
@@ -16,5 +18,6 @@ export function processIo(): CliIo {
     err: (t) => process.stderr.write(t.endsWith('\n') ? t : `${t}\n`),
     cwd: process.cwd(),
     env: process.env,
+    errStream: process.stderr,
   };
 }

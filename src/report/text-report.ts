@@ -1,7 +1,18 @@
 /** The readable terminal report of an interpretation (`hesper interpret FILE`). */
 import type { AlbedoPosterior } from '../inference/types.ts';
 import type { Summary } from '../inference/summary.ts';
+import type { Interpretation } from '../interpret/types.ts';
 import { fmtSig, renderTable } from './table.ts';
+import { interpretationSections } from './text-interpretation.ts';
+
+export interface TextReportOptions {
+  /** The composition paragraph(s) to print at the end (Markdown text). */
+  paragraph?: string;
+}
+
+function isInterpretation(r: AlbedoPosterior): r is Interpretation {
+  return 'verdict' in r && 'candidates' in r;
+}
 
 const ROWS: Array<[keyof AlbedoPosterior, string, number]> = [
   ['geometricAlbedo', 'geometric albedo A_g', 3],
@@ -44,7 +55,7 @@ export function bulletList(title: string, items: string[]): string {
   return [`${title}:`, ...items.map((i) => `  - ${i}`)].join('\n');
 }
 
-export function textReport(r: AlbedoPosterior): string {
+export function textReport(r: AlbedoPosterior | Interpretation, options: TextReportOptions = {}): string {
   const parts = [
     `${r.name}: band ${r.band.id} (${r.band.minNm}-${r.band.maxNm} nm${r.band.approximate ? ', approximate' : ''}), ${r.band.weighting}-weighted`,
     '',
@@ -57,8 +68,10 @@ export function textReport(r: AlbedoPosterior): string {
   ];
   const mass = massEffectsTable(r);
   if (mass) parts.push('', mass);
+  if (isInterpretation(r)) parts.push(...interpretationSections(r));
   parts.push('', bulletList('assumptions that drove the result', r.assumptions), '', bulletList('warnings', r.warnings));
   const d = r.diagnostics;
   parts.push('', `diagnostics: ${d.samples} draws x ${d.gridNodes} grid nodes, effective sample size ${fmtSig(d.effectiveSampleSize, 4)}, seed ${d.seed}, ${fmtSig(d.computeMs, 3)} ms`);
+  if (options.paragraph) parts.push('', 'paragraph for the paper (Markdown; `--report tex` for LaTeX):', '', options.paragraph.trimEnd());
   return parts.join('\n');
 }

@@ -1,0 +1,152 @@
+/**
+ * The figure of the write-up: the A_g posterior (top) and the geometric-albedo
+ * intervals of the candidates shown (bottom) on one albedo axis, with the cloud-free
+ * ceiling as a dashed line. A vega-lite specification compiled to vega and rendered
+ * to SVG headless (View.toSVG with renderer "none": no browser, no canvas). Readable in
+ * black and white: status is told by the point shape and the line dash, and each row
+ * names its candidate and status.
+ */
+import * as vega from 'vega';
+import * as vl from 'vega-lite';
+import type { TopLevelSpec } from 'vega-lite';
+import { cdfAt, quantileOf } from '../interpret/posterior-grid.ts';
+import type { Candidate, Interpretation } from '../interpret/types.ts';
+import { proseName } from './wording-candidates.ts';
+
+/** Candidates drawn (our choice: a figure stays readable with about a dozen rows). */
+export const FIGURE_ROWS = { consistent: 5, marginal: 3, excluded: 4 } as const;
+const HISTOGRAM_BINS = 40;
+const NOT_MATERIALS = new Set(['model', 'body']);
+
+/** The candidates a figure shows: leading consistent, marginal and excluded materials, plus the ceiling entry. */
+export function figureCandidates(i: Interpretation): Candidate[] {
+  const materials = i.candidates.filter((c) => !NOT_MATERIALS.has(c.category) && c.checks.surface === 'ok');
+  const pick = (status: Candidate['status'], n: number) => {
+    const out: Candidate[] = [];
+    const seen = new Set<string>();
+    for (const c of materials.filter((x) => x.status === status)) {
+      const k = proseName(c).replace(/\s*\(Mie.*$/, '').toLowerCase();
+      if (seen.has(k)) continue;
+      seen.add(k);
+      out.push(c);
+      if (out.length >= n) break;
+    }
+    return out;
+  };
+  const shown = [...pick('consistent', FIGURE_ROWS.consistent), ...pick('marginal', FIGURE_ROWS.marginal), ...pick('excluded', FIGURE_ROWS.excluded)];
+  const ceiling = i.verdict.ceiling && i.candidates.find((c) => c.id === i.verdict.ceiling!.entryId);
+  if (ceiling && !shown.some((c) => c.id === ceiling.id)) shown.unshift(ceiling);
+  return shown;
+}
+
+/** Row label: the candidate's name (shortened) and status. */
+export function rowLabel(c: Candidate): string {
+  const mie = /^(.*?),\s*r_eff\s+([\d.]+)\s*um\s*\(Mie\)$/.exec(c.name);
+  const name = mie ? `${mie[1]}, ${mie[2]} µm grains` : proseName(c);
+  const short = name.length > 48 ? `${name.slice(0, 46)}..` : name;
+  return `${short} [${c.status}]`;
+}
+
+export function figureSpec(i: Interpretation, geometricAlbedoGrid: Float64Array): TopLevelSpec {
+  const shown = figureCandidates(i);
+  const hiData = Math.max(quantileOf(geometricAlbedoGrid, 0.999), ...shown.map((c) => c.geometricAlbedoRange[1]), i.verdict.ceiling?.geometricAlbedo ?? 0);
+  const xMax = Math.min(1.5, Math.max(0.1, Math.ceil(hiData * 20 + 0.5) / 20));
+  const width = xMax / HISTOGRAM_BINS;
+  const bins = Array.from({ length: HISTOGRAM_BINS }, (_, k) => {
+    const a = k * width;
+    const b = a + width;
+    return { lo: a, hi: b, density: (cdfAt(geometricAlbedoGrid, b) - cdfAt(geometricAlbedoGrid, a)) / width };
+  });
+  const rows = shown.map((c) => ({ label: rowLabel(c), status: c.status, lo: c.geometricAlbedoRange[0], hi: c.geometricAlbedoRange[1], nominal: c.geometricAlbedoNominal }));
+  const x = { scale: { domain: [0, xMax], nice: false, zero: true } };
+  const band = `${i.band.label} band, ${Math.round(i.band.minNm)}-${Math.round(i.band.maxNm)} nm`;
+  const ceiling = i.verdict.ceiling
+    ? [{ ag: i.verdict.ceiling.geometricAlbedo, text: `cloud-free ceiling ${i.verdict.ceiling.geometricAlbedo.toFixed(2)}` }]
+    : [];
+  const ceilingLayers = ceiling.length === 0 ? [] : [
+    { data: { values: ceiling }, mark: { type: 'rule' as const, strokeDash: [6, 4], color: 'black' }, encoding: { x: { field: 'ag', type: 'quantitative' as const } } },
+  ];
+  const statusScale = { domain: ['consistent', 'marginal', 'excluded'], range: ['circle', 'square', 'cross'] };
+  return {
+    $schema: 'https://vega.github.io/schema/vega-lite/v6.json',
+    description: `Geometric albedo of ${i.name} and the catalog candidates shown`,
+    title: {
+      text: `${i.name}: geometric albedo and catalog candidates`,
+      subtitle: `clouds or ice required: ${i.verdict.cloudsOrIceRequired}; rows: catalog candidates [status], intervals converted to A_g in this band`,
+      anchor: 'start',
+    },
+    config: { font: 'Helvetica, Arial, sans-serif', axis: { labelColor: 'black', titleColor: 'black', gridColor: '#dddddd' }, view: { stroke: 'black' } },
+    resolve: { scale: { x: 'shared' } },
+    vconcat: [
+      {
+        width: 520,
+        height: 160,
+        layer: [
+          {
+            data: { values: bins },
+            mark: { type: 'rect', fill: '#bbbbbb', stroke: 'black', strokeWidth: 0.5 },
+            encoding: {
+              x: { field: 'lo', type: 'quantitative', ...x, title: null, axis: { labels: false, ticks: true } },
+              x2: { field: 'hi' },
+              y: { field: 'density', type: 'quantitative', title: 'posterior density (per unit A_g)' },
+            },
+          },
+          ...ceilingLayers,
+          ...(ceiling.length === 0 ? [] : [{
+            data: { values: ceiling },
+            mark: { type: 'text' as const, align: 'left' as const, dx: 4, dy: -4, baseline: 'bottom' as const, fontSize: 11, color: 'black' },
+            encoding: { x: { field: 'ag', type: 'quantitative' as const }, y: { value: 12 }, text: { field: 'text', type: 'nominal' as const } },
+          }]),
+        ],
+      },
+      {
+        width: 520,
+        height: { step: 18 },
+        layer: [
+          {
+            data: { values: rows },
+            mark: { type: 'rule', strokeWidth: 2, color: 'black' },
+            encoding: {
+              y: { field: 'label', type: 'nominal', sort: null, title: null, axis: { labelLimit: 1000 } },
+              x: { field: 'lo', type: 'quantitative', ...x, title: `geometric albedo A_g (dimensionless; ${band})` },
+              x2: { field: 'hi' },
+              strokeDash: { field: 'status', type: 'nominal', scale: { domain: statusScale.domain, range: [[1, 0], [6, 3], [2, 2]] }, legend: { title: 'status', orient: 'bottom' } },
+            },
+          },
+          {
+            data: { values: rows },
+            mark: { type: 'point', filled: false, size: 60, color: 'black', strokeWidth: 1.5 },
+            encoding: {
+              y: { field: 'label', type: 'nominal', sort: null },
+              x: { field: 'nominal', type: 'quantitative' },
+              shape: { field: 'status', type: 'nominal', scale: statusScale, legend: { title: 'status', orient: 'bottom' } },
+            },
+          },
+          ...ceilingLayers,
+        ],
+      },
+    ],
+  } as TopLevelSpec;
+}
+
+/** Collects compiler messages instead of printing them (stdout carries results only). */
+function quietLogger(messages: string[]) {
+  const keep = (...args: unknown[]) => {
+    messages.push(args.map(String).join(' '));
+    return logger;
+  };
+  const logger = { level: () => logger, error: keep, warn: keep, info: keep, debug: keep };
+  return logger;
+}
+
+/** The figure as SVG text, rendered without a browser. */
+export async function figureSvg(i: Interpretation, geometricAlbedoGrid: Float64Array): Promise<string> {
+  const messages: string[] = [];
+  const compiled = vl.compile(figureSpec(i, geometricAlbedoGrid), { logger: quietLogger(messages) as never }).spec;
+  const view = new vega.View(vega.parse(compiled), { renderer: 'none', logLevel: vega.None });
+  try {
+    return await view.toSVG();
+  } finally {
+    view.finalize();
+  }
+}

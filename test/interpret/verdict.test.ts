@@ -1,0 +1,120 @@
+import { describe, expect, it } from 'vitest';
+import { interpretSystem } from '../../src/interpret/run.ts';
+import { matchCatalog, type MatchContext } from '../../src/interpret/match.ts';
+import { planetClassOf } from '../../src/interpret/planet-class.ts';
+import type { PlanetClassReading } from '../../src/interpret/types.ts';
+import { decideVerdict } from '../../src/interpret/verdict.ts';
+import { resolveBand } from '../../src/physics/bandpass.ts';
+import { demoJson, loadDemo, parseJson } from '../inference/helpers.ts';
+import { entry, seededCatalog, temperatures, uniformGrid, uniformSummary } from './helpers.ts';
+
+const giant: PlanetClassReading = { planetClass: 'giant', basis: 'radius', radiusRearth: 11, text: 'planet class giant (gas-rich)' };
+
+function ctx(ag: [number, number]): MatchContext {
+  return {
+    band: resolveBand('tess'),
+    planetClass: giant,
+    phaseIntegral: { kind: 'uniform', min: 1, max: 1.5 },
+    geometricAlbedo: uniformSummary(...ag),
+    quantiles: { geometricAlbedo: uniformGrid(...ag), daysideTemperatureK: uniformGrid(1400, 1500), equilibriumTemperatureK: uniformGrid(1200, 1300) },
+    feasibility: temperatures([1400, 1500], [1200, 1300]),
+  };
+}
+
+/** Invented cloud-free references: a tested one (window) with A_g up to 0.2, an untested idealised one at 0.8. */
+const references = [
+  entry({ id: 'clear-tested', category: 'clear-atmosphere', valueMin: 0.05, valueNominal: 0.1, valueMax: 0.2, temperatureMinK: 900, temperatureMaxK: 2000, bandMinNm: 200, bandMaxNm: 5000 }),
+  entry({ id: 'clear-cold', category: 'clear-atmosphere', valueMin: 0.5, valueNominal: 0.55, valueMax: 0.6, temperatureMaxK: 300, bandMinNm: 200, bandMaxNm: 5000 }),
+  entry({ id: 'clear-ideal', category: 'clear-atmosphere', valueMin: 0.8, valueNominal: 0.8, valueMax: 0.8, bandMinNm: 200, bandMaxNm: 5000 }),
+];
+
+function verdictFor(ag: [number, number], list = references) {
+  const c = ctx(ag);
+  return decideVerdict(matchCatalog(list, c), c.quantiles.geometricAlbedo, giant);
+}
+
+describe('the clouds-or-ice verdict rule', () => {
+  it('uses the highest feasible tested cloud-free reference as the ceiling', () => {
+    const v = verdictFor([0.3, 0.5]);
+    expect(v.ceiling).toMatchObject({ entryId: 'clear-tested', geometricAlbedo: 0.2, temperatureTested: true });
+    expect(v.reason).toMatch(/were not used because they cannot be shown to apply/);
+  });
+
+  it('says yes when P(A_g > ceiling) >= 0.95, no when <= 0.05, else inconclusive', () => {
+    // derived for A_g uniform: P(A_g > 0.2) = 1 on [0.3, 0.5]; 0 on [0.05, 0.19]; 0.5 on [0.1, 0.3].
+    expect(verdictFor([0.3, 0.5])).toMatchObject({ cloudsOrIceRequired: 'yes', probability: 1 });
+    expect(verdictFor([0.05, 0.19])).toMatchObject({ cloudsOrIceRequired: 'no', probability: 0 });
+    const mid = verdictFor([0.1, 0.3]);
+    expect(mid.cloudsOrIceRequired).toBe('inconclusive');
+    expect(mid.probability).toBeCloseTo(0.5, 3);
+    // derived: P(A_g > 0.2) = 0.96 for A_g uniform on [0.196, 0.296]: just above the threshold.
+    expect(verdictFor([0.196, 0.296]).cloudsOrIceRequired).toBe('yes');
+    // derived: P(A_g > 0.2) = 0.0045 / 0.0945 = 0.048 on [0.11, 0.2045] (no), 0.006 / 0.1 = 0.06 on [0.106, 0.206] (inconclusive).
+    expect(verdictFor([0.11, 0.2045]).cloudsOrIceRequired).toBe('no');
+    expect(verdictFor([0.106, 0.206]).cloudsOrIceRequired).toBe('inconclusive');
+  });
+
+  it('falls back to untested references only when no tested one is feasible, and says so', () => {
+    const v = verdictFor([0.3, 0.5], [references[1]!, references[2]!]);
+    expect(v.ceiling).toMatchObject({ entryId: 'clear-ideal', temperatureTested: false });
+    expect(v.cloudsOrIceRequired).toBe('no');
+    expect(v.reason).toMatch(/feasibility cannot be tested/);
+  });
+
+  it('is inconclusive without any feasible cloud-free reference', () => {
+    const v = verdictFor([0.3, 0.5], [references[1]!]);
+    expect(v).toMatchObject({ cloudsOrIceRequired: 'inconclusive', probability: null, ceiling: null });
+  });
+});
+
+describe('planet class from the radius (Fulton et al. 2017 radius valley, 1.5-2.0 R_earth)', () => {
+  const base = () => demoJson('systems/corvina-b.json');
+  it('reads giants, rocky planets and the valley from the radius', () => {
+    const j = base();
+    delete j.planet.radiusRatio;
+    j.planet.radiusRearth = 1.2;
+    expect(planetClassOf(parseJson(j)).planetClass).toBe('rocky');
+    j.planet.radiusRearth = 1.8;
+    expect(planetClassOf(parseJson(j)).planetClass).toBe('either');
+    j.planet.radiusRearth = 2.5;
+    expect(planetClassOf(parseJson(j)).planetClass).toBe('giant');
+  });
+
+  it('follows assumptions.planetClass when given', () => {
+    const j = base();
+    j.assumptions = { planetClass: 'rocky' };
+    expect(planetClassOf(parseJson(j))).toMatchObject({ planetClass: 'rocky', basis: 'assumption' });
+  });
+
+  it('states its fallback when the stellar radius is unknown', () => {
+    // Fixture W gives Rp/R* = 0.1 and no stellar radius: with R* = 1 R_sun the radius is
+    // 0.1 * 6.957e8 / 6.3781e6 = 10.9 R_earth (IAU 2015 nominal radii; derived), rocky only if R* < 1.5 / 10.9 = 0.138 R_sun.
+    const c = planetClassOf(loadDemo('fixtures/weak-detection.json'));
+    expect(c.planetClass).toBe('giant');
+    expect(c.radiusRearth).toBeCloseTo(10.91, 2);
+    expect(c.text).toMatch(/stellar radius is not given.*R\* = 1 R_sun.*rocky only if R\* < 0\.138 R_sun/);
+  });
+});
+
+describe('verdicts on the invented demo planets with the curated catalog', () => {
+  const catalog = seededCatalog().data;
+  it('a bright hot Neptune (Aurelia b, invented) needs clouds or ice', () => {
+    const r = interpretSystem(loadDemo('systems/aurelia-b.json'), { catalog });
+    expect(r.verdict.cloudsOrIceRequired).toBe('yes');
+    expect(r.verdict.probability).toBeGreaterThanOrEqual(0.95);
+    expect(r.verdict.reason).toContain(r.verdict.ceiling!.entryName);
+  });
+
+  it('a dark hot Jupiter (Corvina b, invented) does not', () => {
+    const r = interpretSystem(loadDemo('systems/corvina-b.json'), { catalog });
+    expect(r.verdict.cloudsOrIceRequired).toBe('no');
+    expect(r.verdict.probability).toBeLessThanOrEqual(0.05);
+  });
+
+  it('a weak detection (fixture W, invented) is inconclusive', () => {
+    const r = interpretSystem(loadDemo('fixtures/weak-detection.json'), { catalog });
+    expect(r.verdict.cloudsOrIceRequired).toBe('inconclusive');
+    expect(r.verdict.probability).toBeGreaterThan(0.05);
+    expect(r.verdict.probability).toBeLessThan(0.95);
+  });
+});
