@@ -11,10 +11,12 @@ type Register = (program: Command, io: CliIo) => void;
  */
 const COMMANDS: Record<string, () => Promise<Register>> = {
   bands: () => import('./commands/bands.ts').then((m) => m.registerBands),
+  batch: () => import('./commands/batch.ts').then((m) => m.registerBatch),
   catalog: () => import('./commands/catalog.ts').then((m) => m.registerCatalog),
   decompose: () => import('./commands/decompose.ts').then((m) => m.registerDecompose),
   demo: () => import('./commands/demo.ts').then((m) => m.registerDemo),
   interpret: () => import('./commands/interpret.ts').then((m) => m.registerInterpret),
+  serve: () => import('./commands/serve.ts').then((m) => m.registerServe),
 };
 
 /** The command named on the command line, if it is one of ours. */
