@@ -7,7 +7,7 @@
  */
 import type { Nuisance } from './nuisance.ts';
 import type { LogLikelihood } from './likelihood.ts';
-import { type DrawModel, type MassPrediction, type ModelSettings, drawModel, planetTable, predictMassEffects, thermalRatioRow } from './signal-model.ts';
+import { type DrawModel, type MassPrediction, type ModelSettings, drawModel, planetDenseTable, predictMassEffects, thermalRatioRow } from './signal-model.ts';
 
 /** A bivariate Gaussian likelihood of (eclipse depth, phase amplitude) with correlated errors. */
 export interface DepthAmplitudeJoint {
@@ -60,7 +60,7 @@ export function runGrid(draws: Nuisance[], settings: ModelSettings, lik: Likelih
   const masses: Array<MassPrediction | undefined> = new Array(n);
   const lnC = lnAlbedoFactors(nodes);
   const factor = lnC.map(Math.exp);
-  const table = planetTable(settings);
+  const table = planetDenseTable(settings);
   const joint = lik.depthAmplitude;
   const needNight = lik.phaseAmplitudePpm !== undefined || lik.nightsideFluxPpm !== undefined || joint !== undefined;
   const depthRow = new Float64Array(nodes);

@@ -13,7 +13,7 @@
  */
 import type { Band } from '../physics/bandpass.ts';
 import { bandFlux, getBandTable } from '../physics/bandpass.ts';
-import { TABLE_MAX_K, TABLE_MIN_K, tableLogFlux, type BandTable } from '../physics/band-table.ts';
+import { TABLE_MIN_K, denseFluxTable, type BandTable, type DenseFluxTable } from '../physics/band-table.ts';
 import { beamingAmplitude, ellipsoidalAmplitude, rvSemiAmplitudeMs } from '../physics/mass-effects.ts';
 import { lambertPhaseFunction } from '../physics/reflection.ts';
 import { daysideTemperatureK, nightsideTemperatureK } from '../physics/temperature.ts';
@@ -30,8 +30,12 @@ export function planetTable(m: ModelSettings): BandTable {
   return getBandTable(m.band, m.weighting);
 }
 
+/** The dense linear-flux table of the settings (built once per band and weighting). */
+export function planetDenseTable(m: ModelSettings): DenseFluxTable {
+  return denseFluxTable(planetTable(m));
+}
+
 export const LN_TABLE_MIN_K = Math.log(TABLE_MIN_K);
-export const LN_TABLE_MAX_K = Math.log(TABLE_MAX_K);
 
 export interface DrawModel {
   /** (k/aR)^2 Phi(90 - i): reflected eclipse depth per unit A_g. */
@@ -46,8 +50,6 @@ export interface DrawModel {
   nightZeroK: number;
   /** k^2 / F_band(T*), to turn a band flux into a planet-to-star ratio. */
   thermalScale: number;
-  /** ln of thermalScale (-Infinity when thermal emission is off). */
-  lnThermalScale: number;
   /** ln T_day and ln T_night at A_B = 0 (-Infinity for 0 K). */
   lnDayZeroK: number;
   lnNightZeroK: number;
@@ -69,7 +71,6 @@ export function drawModel(n: Nuisance, m: ModelSettings): DrawModel {
   const nightZeroK = nightsideTemperatureK(n.teffK, n.scaledSemiMajorAxis, 0, n.redistribution);
   const thermalScale = m.thermal ? (n.radiusRatio * n.radiusRatio) / bandFlux(m.band, n.teffK, m.weighting) : 0;
   return {
-    lnThermalScale: Math.log(thermalScale),
     lnDayZeroK: Math.log(dayZeroK),
     lnNightZeroK: Math.log(nightZeroK),
     reflectedDepthPerAg: geom * lambertPhaseFunction(Math.abs(halfPi - n.inclinationRad)),
@@ -85,44 +86,31 @@ export function drawModel(n: Nuisance, m: ModelSettings): DrawModel {
 }
 
 /**
- * The hot-loop form of thermalRatio: the planet-to-star band-flux ratio at ln T, read
- * from the table directly (0 below the table's 10 K; the table ends at 20000 K, above
- * any planet this tool accepts).
- */
-export function thermalRatioLn(dm: DrawModel, table: BandTable, lnT: number): number {
-  if (!(lnT >= LN_TABLE_MIN_K) || dm.thermalScale === 0) return 0;
-  return Math.exp(dm.lnThermalScale + tableLogFlux(table, lnT < LN_TABLE_MAX_K ? lnT : LN_TABLE_MAX_K));
-}
-
-/**
- * thermalRatioLn for a whole grid row: out[j] = ratio at ln T = lnT0 + lnFactor[j].
- * The table's cubic Hermite lookup (band-table.ts) is written out here because this
+ * The planet-to-star band-flux ratio for a whole grid row: out[j] at ln T = lnT0 + lnFactor[j] (0 below 10 K),
+ * from the dense linear-flux table (band-table.ts), so the row needs no exp. This
  * loop runs samples x nodes times per interpretation.
  */
-export function thermalRatioRow(dm: DrawModel, table: BandTable, lnT0: number, lnFactor: Float64Array, out: Float64Array): void {
+export function thermalRatioRow(dm: DrawModel, dense: DenseFluxTable, lnT0: number, lnFactor: Float64Array, out: Float64Array): void {
   const n = lnFactor.length;
   if (dm.thermalScale === 0 || lnT0 === -Infinity) {
     out.fill(0, 0, n);
     return;
   }
-  const { lnFlux, tangent, invStep } = table;
-  const base = table.lnT0;
-  const last = lnFlux.length - 2;
-  const scale = dm.lnThermalScale;
+  const { flux, invStep } = dense;
+  const base = dense.lnT0;
+  const last = flux.length - 2;
+  const scale = dm.thermalScale;
   for (let j = 0; j < n; j++) {
-    let lnT = lnT0 + lnFactor[j]!;
+    const lnT = lnT0 + lnFactor[j]!;
     if (!(lnT >= LN_TABLE_MIN_K)) {
       out[j] = 0;
       continue;
     }
-    if (lnT > LN_TABLE_MAX_K) lnT = LN_TABLE_MAX_K;
     const s = (lnT - base) * invStep;
     let i = s | 0;
     if (i > last) i = last;
-    const t = s - i;
-    const u = 1 - t;
-    const lnF = (1 + 2 * t) * u * u * lnFlux[i]! + t * u * u * tangent[i]! + t * t * (3 - 2 * t) * lnFlux[i + 1]! - t * t * u * tangent[i + 1]!;
-    out[j] = Math.exp(scale + lnF);
+    const f0 = flux[i]!;
+    out[j] = scale * (f0 + (s - i) * (flux[i + 1]! - f0));
   }
 }
 

@@ -84,3 +84,33 @@ export function tableLogSlope(table: BandTable, lnT: number): number {
   const dpdt = (6 * t * t - 6 * t) * (y0 - y1) + (3 * t * t - 4 * t + 1) * m0 + (3 * t * t - 2 * t) * m1;
   return dpdt * table.invStep;
 }
+
+/**
+ * A dense table of F itself (not ln F) on a uniform ln T grid, for loops that need the
+ * linear flux at millions of temperatures: a lookup is one linear interpolation and no
+ * exp. Built from the Hermite table above. Linear interpolation errs by
+ * (d ln F / d ln T)^2 h^2 / 8 relative (common practice); with 2^16 nodes
+ * (h = 1.16e-4) that is at most 4e-6 above 500 K in optical bands, and the flux of
+ * cooler planets is negligible there (test/inference/signal-model.test.ts reports the
+ * worst case).
+ */
+export interface DenseFluxTable {
+  readonly lnT0: number;
+  readonly invStep: number;
+  readonly flux: Float64Array;
+}
+
+export const DENSE_POINTS = 65536;
+const denseCache = new WeakMap<BandTable, DenseFluxTable>();
+
+export function denseFluxTable(table: BandTable): DenseFluxTable {
+  const cached = denseCache.get(table);
+  if (cached) return cached;
+  const lnT0 = Math.log(table.minK);
+  const step = (Math.log(table.maxK) - lnT0) / (DENSE_POINTS - 1);
+  const flux = new Float64Array(DENSE_POINTS);
+  for (let i = 0; i < DENSE_POINTS; i++) flux[i] = Math.exp(tableLogFlux(table, lnT0 + i * step));
+  const dense = { lnT0, invStep: 1 / step, flux };
+  denseCache.set(table, dense);
+  return dense;
+}

@@ -88,7 +88,7 @@ function geometryFrom(o: DecomposeCliOptions): EclipseGeometry {
 export function registerDecompose(program: Command, io: CliIo): void {
   program
     .command('decompose')
-    .description("Fold a light curve and separate the planet's phase term and eclipse from the star's ellipsoidal and beaming signals")
+    .description("fold a light curve and separate the planet's phase term and eclipse from the star's ellipsoidal and beaming signals")
     .argument('<curve>', 'CSV with a header time,flux,flux_err (days) or phase,flux,flux_err (folded); # lines are comments')
     .option('--period <days>', 'orbital period [days] (default with --system: planet.periodDays)', numberOption('period'))
     .option('--system <file>', 'system file: geometry, period and the predicted ellipsoidal and beaming signals come from it')

@@ -26,7 +26,7 @@ interface DemoOptions {
 export function registerDemo(program: Command, io: CliIo): void {
   program
     .command('demo')
-    .description('Interpret the invented demo systems (demo-data/systems) and print the reports')
+    .description('interpret the invented demo systems (demo-data/systems) and print the reports')
     .option('--db <path>', 'catalog database file (default: $HESPER_DB, else db/hesper.sqlite in the hesper folder)')
     .action(async (opts: DemoOptions) => {
       const files = demoSystemFiles();

@@ -89,7 +89,7 @@ export async function writeCompanions(io: CliIo, d: DetailedInterpretation, cite
 export function registerInterpret(program: Command, io: CliIo): void {
   const cmd = program
     .command('interpret')
-    .description('Geometric and Bond albedo, thermal share, catalog candidates and the clouds-or-ice verdict from a system file')
+    .description('geometric and Bond albedo, thermal share, catalog candidates and the clouds-or-ice verdict from a system file')
     .argument('<file>', 'system file (JSON); `hesper` validates it and names every bad field')
     .option('--json', 'print the contract JSON instead of the readable report')
     .addOption(new Option('--report <format>', 'print the composition paragraphs alone, as Markdown or LaTeX').choices([...REPORT_FORMATS]))
