@@ -6,8 +6,6 @@
  * black and white: status is told by the point shape and the line dash, and each row
  * names its candidate and status.
  */
-import * as vega from 'vega';
-import * as vl from 'vega-lite';
 import type { TopLevelSpec } from 'vega-lite';
 import { cdfAt, quantileOf } from '../interpret/posterior-grid.ts';
 import type { Candidate, Interpretation } from '../interpret/types.ts';
@@ -141,6 +139,8 @@ function quietLogger(messages: string[]) {
 
 /** The figure as SVG text, rendered without a browser. */
 export async function figureSvg(i: Interpretation, geometricAlbedoGrid: Float64Array): Promise<string> {
+  // vega takes about half a second to load: only runs that draw a figure pay for it.
+  const [vega, vl] = await Promise.all([import('vega'), import('vega-lite')]);
   const messages: string[] = [];
   const compiled = vl.compile(figureSpec(i, geometricAlbedoGrid), { logger: quietLogger(messages) as never }).spec;
   const view = new vega.View(vega.parse(compiled), { renderer: 'none', logLevel: vega.None });
