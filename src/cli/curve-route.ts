@@ -27,7 +27,7 @@ export interface CurveOptions {
 export function addCurveOptions(cmd: Command): Command {
   return cmd
     .option('--curve <file>', 'light curve CSV (time,flux,flux_err or phase,flux,flux_err): its decomposition replaces the measurements')
-    .option('--epoch <bjd>', 'mid-transit time for --curve [days, the time system of the curve]', numberOption('epoch'))
+    .option('--epoch <bjd>', 'mid-transit time for --curve [days, the time system of the curve] (default: planet.transitEpochBjd)', numberOption('epoch'))
     .option('--period <days>', 'orbital period for --curve [days] (default: planet.periodDays)', numberOption('period', 0))
     .option('--bins <n>', 'fit the --curve binned into N phase bins', intOption('bins', 10, 1_000_000))
     .addOption(new Option('--phase-model <model>', "planet's phase term for --curve").choices(['cosine', 'lambert']))
@@ -42,12 +42,13 @@ export function decomposeWithSystem(system: SystemInput, file: string, opts: Cur
     throw inputError('invalid-input', '--period', 'the light curve needs the orbital period: give --period DAYS or planet.periodDays in the system file');
   }
   const curve = readCurveCsv(io.cwd, file);
-  if (curve.column === 'time' && opts.epoch === undefined) {
-    throw inputError('invalid-input', '--epoch', 'a time series needs the mid-transit epoch: give --epoch BJD (or a folded phase,flux,flux_err curve)');
+  const epoch = opts.epoch ?? system.planet.transitEpochBjd;
+  if (curve.column === 'time' && epoch === undefined) {
+    throw inputError('invalid-input', '--epoch', 'a time series needs the mid-transit epoch: give --epoch BJD or planet.transitEpochBjd in the system file (or a folded phase,flux,flux_err curve)');
   }
   return decompose(curve, {
     periodDays,
-    ...(opts.epoch !== undefined ? { epochDays: opts.epoch } : {}),
+    ...(epoch !== undefined ? { epochDays: epoch } : {}),
     geometry: prediction.geometry,
     phaseModel: opts.phaseModel ?? 'cosine',
     fitOffset: opts.offset ?? false,

@@ -42,6 +42,10 @@ export function parseJsonText(fieldPath: string, text: string, label: string): u
   try {
     return JSON.parse(text);
   } catch (e) {
+    if (!(e instanceof SyntaxError)) {
+      // A parser may run out of stack on valid but absurdly deep text (RangeError).
+      throw inputError('invalid-input', fieldPath, `${label} could not be read as JSON (${e instanceof Error ? e.name : 'error'}: nested too deeply or too large); hesper's input files need only a few levels of nesting`);
+    }
     const place = locateJsonError(text);
     const where = place ? ` at line ${place.line}, column ${place.column}` : '';
     const near = place ? `: near ${JSON.stringify(text.slice(place.offset, place.offset + 20))}` : `: ${(e as Error).message}`;

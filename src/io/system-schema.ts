@@ -40,6 +40,8 @@ export const planetSchema = z
     inclinationDeg: opt(parameterQuantity, 'Orbital inclination [deg]; 90 if not given.'),
     massMjup: opt(parameterQuantity, 'Planet mass [Mjup] (true mass, or M sin i if inclination is unknown).'),
     massMearth: opt(parameterQuantity, 'Planet mass [Mearth].'),
+    transitEpochBjd: z.number().min(0).max(1e7).optional()
+      .describe('Mid-transit time [days, BJD or the time system of your light curves]; used with a light curve.'),
   })
   .strict();
 

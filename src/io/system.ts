@@ -19,7 +19,7 @@ export interface SystemInput {
   name: string;
   band: Band;
   star: Fields<typeof STAR_FIELDS> & { teffK: Dist; metallicityDex: number };
-  planet: Fields<typeof PLANET_FIELDS>;
+  planet: Fields<typeof PLANET_FIELDS> & { transitEpochBjd?: number };
   measurements: Omit<Fields<typeof MEASUREMENT_FIELDS>, 'phaseSemiAmplitudePpm'> & {
     /** Correlation of the depth and phase-amplitude errors (both Gaussian), when given. */
     depthAmplitudeCorrelation?: number;
@@ -145,7 +145,7 @@ export function parseSystem(json: unknown, opts: ParseOptions = {}): SystemInput
       name: f.name,
       band,
       star: { ...star, teffK: star.teffK, metallicityDex: f.star.metallicity },
-      planet,
+      planet: f.planet.transitEpochBjd !== undefined ? { ...planet, transitEpochBjd: f.planet.transitEpochBjd } : planet,
       measurements,
       assumptions: {
         ...f.assumptions,

@@ -5,6 +5,7 @@
  */
 import type { z } from 'zod';
 import { HesperError, type Issue } from '../errors.ts';
+import { describeValue } from './describe-value.ts';
 
 type ZodIssue = z.core.$ZodIssue;
 
@@ -47,16 +48,22 @@ function bestBranch(branches: ZodIssue[][], input: unknown): ZodIssue[] {
   return best ?? branches[0] ?? [];
 }
 
+/** Unknown keys named in a message: the first few, each cut, then how many more. */
+const MAX_KEYS_NAMED = 5;
+function listKeys(keys: readonly string[]): string {
+  const named = keys.slice(0, MAX_KEYS_NAMED).map(describeValue).join(', ');
+  return keys.length > MAX_KEYS_NAMED ? `${named} and ${keys.length - MAX_KEYS_NAMED} more` : named;
+}
+
 function readable(issue: ZodIssue, input: unknown): string {
   switch (issue.code) {
     case 'invalid_type': {
-      const got = input === undefined ? 'nothing (missing)' : Number.isNaN(input) ? 'NaN' : JSON.stringify(input);
-      return input === undefined ? `missing: expected ${issue.expected}` : `expected ${issue.expected}, got ${got}`;
+      return input === undefined ? `missing: expected ${issue.expected}` : `expected ${issue.expected}, got ${describeValue(input)}`;
     }
     case 'unrecognized_keys':
-      return `unknown field${issue.keys.length > 1 ? 's' : ''} ${issue.keys.map((k) => `"${k}"`).join(', ')}`;
+      return `unknown field${issue.keys.length > 1 ? 's' : ''} ${listKeys(issue.keys)}`;
     case 'invalid_value':
-      return `must be one of ${issue.values.map((v) => JSON.stringify(v)).join(', ')}, got ${JSON.stringify(input)}`;
+      return `must be one of ${issue.values.map(describeValue).join(', ')}, got ${describeValue(input)}`;
     default:
       return issue.message;
   }
@@ -78,8 +85,8 @@ export function zodIssuesToIssues(issues: ReadonlyArray<ZodIssue>, root: unknown
           path: joinPath(prefix, fullPath),
           message: input === undefined
             ? `missing: ${issue.message && issue.message !== 'Invalid input' ? issue.message : 'a value is required'}`
-            : issue.message && issue.message !== 'Invalid input' ? `${issue.message}, got ${JSON.stringify(input)}` : `has the wrong form, got ${JSON.stringify(input)}`,
-          value: input,
+            : issue.message && issue.message !== 'Invalid input' ? `${issue.message}, got ${describeValue(input)}` : `has the wrong form, got ${describeValue(input)}`,
+          ...(input === undefined || (input !== null && typeof input === 'object') ? {} : { value: input }),
         });
       }
       continue;

@@ -1,3 +1,6 @@
+import { mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import path from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { loadSystemFile } from '../../src/io/system-file.ts';
 import { predictFromSystem, withCurveMeasurements } from '../../src/interpret/from-curve.ts';
@@ -49,8 +52,21 @@ describe('light-curve route: system file + curve', () => {
     const both = await runCli(['decompose', 'curves/tessaly-b-tess.csv', '--system', 'systems/tessaly-b.json', '--epoch', '2460410.3172', '--duration', '2'], { cwd: demo });
     expect(both.code).toBe(2);
     expect(both.stderr).toMatch(/--duration/);
-    const noEpoch = await runCli(['decompose', 'curves/tessaly-b-tess.csv', '--system', 'systems/tessaly-b.json'], { cwd: demo });
+    const dir = mkdtempSync(path.join(tmpdir(), 'hesper-noepoch-'));
+    const j = JSON.parse(readFileSync(`${demo}systems/tessaly-b.json`, 'utf8'));
+    delete j.planet.transitEpochBjd;
+    writeFileSync(path.join(dir, 'sys.json'), JSON.stringify(j));
+    const noEpoch = await runCli(['decompose', `${demo}curves/tessaly-b-tess.csv`, '--system', path.join(dir, 'sys.json')], { cwd: dir });
     expect(noEpoch.code).toBe(2);
     expect(noEpoch.stderr).toMatch(/--epoch/);
+  });
+
+  it('interpret --curve builds the interpretation from the curve (epoch from planet.transitEpochBjd)', async () => {
+    const run = await runCli(['interpret', 'systems/tessaly-b.json', '--curve', 'curves/tessaly-b-tess.csv', '--offset', '--json', '--samples', '800'], { cwd: demo });
+    expect(run.code).toBe(0);
+    const j = JSON.parse(run.stdout);
+    expect(j.assumptions.join(' ')).toMatch(/Measurements from the light curve curves\/tessaly-b-tess\.csv/);
+    expect(j.geometricAlbedo.median).toBeGreaterThanOrEqual(0);
+    expect(j.verdict.cloudsOrIceRequired).toMatch(/^(yes|no|inconclusive)$/);
   });
 });
