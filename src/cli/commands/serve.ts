@@ -59,12 +59,15 @@ export function registerServe(program: Command, io: CliIo): void {
       const app = createApp({ catalog, interpreter, ...(loopback ? { allowedHosts: () => hosts } : {}) });
       try {
         const server = await startServer(app, { host: opts.host, port: opts.port });
+        // Listen for the stop signal before announcing the address, so a client that
+        // stops the server as soon as it reads the address is always heard.
+        const stopped = stopSignal();
         hosts = loopbackHostHeaders(opts.host, server.port);
         if (!loopback) {
           io.err(`warning: listening on ${opts.host}, which other machines can reach. The API has no login and can change the catalog; use --host 127.0.0.1 unless that is what you want.`);
         }
         io.err(`hesper serve: ${server.url}/ (API under /api, OpenAPI at /api/openapi.json; catalog ${catalog.path}; ${workers} worker${workers === 1 ? '' : 's'}). Ctrl-C stops.`);
-        const signal = await stopSignal();
+        const signal = await stopped;
         io.err(`hesper serve: ${signal}, stopping`);
         await server.close();
       } finally {
