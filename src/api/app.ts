@@ -63,6 +63,18 @@ export function createApp(options: AppOptions): Hono {
     if (c.req.path.startsWith('/api/')) c.header('Cache-Control', 'no-store');
   });
 
+  // hono passes only Error instances to onError; a route that throws anything else (a
+  // string, a plain object from a worker) would otherwise reject app.fetch itself.
+  app.use('*', async (c, next) => {
+    try {
+      await next();
+    } catch (e) {
+      if (e instanceof Error) throw e;
+      const what = typeof e === 'string' ? e : Object.prototype.toString.call(e);
+      return errorHandler(deps.log)(new Error(`a value that is not an Error was thrown: ${what}`), c);
+    }
+  });
+
   app.use(
     '/api/*',
     bodyLimit({

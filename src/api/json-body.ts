@@ -5,7 +5,7 @@
  * (413) is applied before, by bodyLimit.
  */
 import type { Context } from 'hono';
-import { checkJsonText } from './json-text.ts';
+import { checkJsonText, keyPath } from './json-text.ts';
 import { HttpInputError } from './http-errors.ts';
 
 /** application/json, or a JSON-based type such as application/merge-patch+json. */
@@ -30,7 +30,7 @@ export async function readJsonBody(c: Context): Promise<unknown> {
   try {
     value = JSON.parse(text);
   } catch (e) {
-    const reason = e instanceof SyntaxError ? e.message : 'not valid JSON';
+    const reason = e instanceof SyntaxError ? e.message : 'nested too deeply or too large to read';
     throw new HttpInputError(400, 'bad-json', `the request body is not valid JSON: ${reason}`, [{ path: 'body', message: `not valid JSON: ${reason}` }]);
   }
   const dup = checkJsonText(text);
@@ -40,7 +40,7 @@ export async function readJsonBody(c: Context): Promise<unknown> {
     ]);
   }
   if (dup) {
-    const path = dup.objectPath === '' ? dup.key : `${dup.objectPath}.${dup.key}`;
+    const path = keyPath(dup.objectPath, dup.key);
     throw new HttpInputError(400, 'bad-json', `the key "${dup.key}" appears twice in one object`, [
       { path, message: `the key "${dup.key}" appears twice in ${dup.objectPath === '' ? 'the top-level object' : dup.objectPath}; JSON objects must not repeat a key` },
     ]);

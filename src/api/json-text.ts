@@ -23,10 +23,16 @@ interface ArrayFrame {
 
 type Frame = ObjectFrame | ArrayFrame;
 
+/** `parent.key` for a plain name; `parent["key"]` for any other key ("", "a b", "a.b"), so no path is empty. */
+export function keyPath(parent: string, key: string): string {
+  if (/^[A-Za-z_$][\w$]*$/.test(key)) return parent === '' ? key : `${parent}.${key}`;
+  return `${parent}[${JSON.stringify(key)}]`;
+}
+
 function childPath(top: Frame | undefined): string {
   if (top === undefined) return '';
   if (top.kind === 'array') return `${top.path}[${top.index}]`;
-  return top.path === '' ? top.key : `${top.path}.${top.key}`;
+  return keyPath(top.path, top.key);
 }
 
 /** End index (inclusive) of the string literal starting at `start` (a double quote). */

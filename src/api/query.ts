@@ -37,7 +37,8 @@ export function readQuery<T extends z.ZodType>(c: Context, schema: T): z.output<
   const flat: Record<string, string> = {};
   for (const [name, values] of rawParams(c.req.url, issues)) {
     if (values.length > 1) issues.push({ path: `query.${name}`, message: `the parameter "${name}" is given ${values.length} times; give it once` });
-    flat[name] = values[0]!;
+    // defineProperty, so "__proto__" becomes a parameter the strict schema reports, not a prototype.
+    Object.defineProperty(flat, name, { value: values[0]!, enumerable: true, writable: true, configurable: true });
   }
   if (issues.length === 0) {
     const parsed = schema.safeParse(flat);
