@@ -15,7 +15,8 @@ function inside(x: number, r: RangeBounds): boolean {
   return true;
 }
 
-function drawOnce(d: Dist, rng: Rng): number {
+/** One draw from a distribution (no truncation); an upper limit has no draw as a prior. */
+export function drawOnce(d: Dist, rng: Rng): number {
   switch (d.kind) {
     case 'fixed': return d.value;
     case 'normal': return d.mean + d.sigma * rng.normal();

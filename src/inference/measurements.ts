@@ -4,6 +4,7 @@ import type { SystemInput } from '../io/system.ts';
 import type { Likelihoods } from './grid.ts';
 import { logLikelihoodOf, upperLimitSigma } from './likelihood.ts';
 import type { Rng } from './random.ts';
+import { drawOnce } from './draw.ts';
 
 export function likelihoodsOf(s: SystemInput): Likelihoods {
   const lik: Likelihoods = {};
@@ -31,18 +32,8 @@ export function likelihoodsOf(s: SystemInput): Likelihoods {
 
 /** One draw of a measured value from its stated uncertainty (for the all-reflected albedo). */
 export function drawMeasurement(d: Dist, rng: Rng): number {
-  switch (d.kind) {
-    case 'fixed': return d.value;
-    case 'normal': return d.mean + d.sigma * rng.normal();
-    case 'split-normal': {
-      const upper = rng.uniform() < d.plus / (d.plus + d.minus);
-      const z = Math.abs(rng.normal());
-      return upper ? d.mode + d.plus * z : d.mode - d.minus * z;
-    }
-    case 'uniform': return d.min + (d.max - d.min) * rng.uniform();
-    case 'upper-limit': return Math.abs(rng.normal()) * upperLimitSigma(d.limit, d.confidence);
-    case 'samples': return d.values[Math.floor(rng.uniform() * d.values.length)]!;
-  }
+  // An upper limit is read as a half-normal (see likelihood.ts); every other form draws as a prior does.
+  return d.kind === 'upper-limit' ? Math.abs(rng.normal()) * upperLimitSigma(d.limit, d.confidence) : drawOnce(d, rng);
 }
 
 /** Central value and a one-sigma width of a measurement, for warnings. */

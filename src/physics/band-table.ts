@@ -50,13 +50,18 @@ export function buildBandTable(curve: ResponseCurve, weighting: Weighting, point
 }
 
 /** ln F from the table at ln T (caller keeps T within [minK, maxK]). */
-export function tableLogFlux(table: BandTable, lnT: number): number {
+/** The table cell holding ln T (clamped to the table) and the position t in [0, 1] inside it. */
+function cellOf(table: BandTable, lnT: number): { i: number; t: number } {
   const s = (lnT - table.lnT0) * table.invStep;
   const last = table.lnFlux.length - 2;
   let i = Math.floor(s);
   if (i < 0) i = 0;
   else if (i > last) i = last;
-  const t = s - i;
+  return { i, t: s - i };
+}
+
+export function tableLogFlux(table: BandTable, lnT: number): number {
+  const { i, t } = cellOf(table, lnT);
   const u = 1 - t;
   const y0 = table.lnFlux[i]!;
   const y1 = table.lnFlux[i + 1]!;
@@ -71,12 +76,7 @@ export function tableLogFlux(table: BandTable, lnT: number): number {
  * (common practice), used for the band-averaged beaming factor in hot loops.
  */
 export function tableLogSlope(table: BandTable, lnT: number): number {
-  const s = (lnT - table.lnT0) * table.invStep;
-  const last = table.lnFlux.length - 2;
-  let i = Math.floor(s);
-  if (i < 0) i = 0;
-  else if (i > last) i = last;
-  const t = s - i;
+  const { i, t } = cellOf(table, lnT);
   const y0 = table.lnFlux[i]!;
   const y1 = table.lnFlux[i + 1]!;
   const m0 = table.tangent[i]!;
