@@ -57,7 +57,9 @@ function allReflected(s: SystemInput, draws: Nuisance[], rng: Rng) {
 
 function sensitivity(s: SystemInput, draws: Nuisance[], settings: ModelSettings, seed: number): SensitivityRow[] {
   const lik = likelihoodsOf(s);
-  const count = Math.max(250, Math.floor(draws.length / 8));
+  // A sixteenth of the draws (at least 250): enough for the medians and intervals of a
+  // sensitivity table, at a fraction of the main grid's cost.
+  const count = Math.max(250, Math.floor(draws.length / 16));
   const subset = draws.slice(0, count);
   return SENSITIVITY_CORNERS.map((corner, c) => {
     const fixed = subset.map((th) => ({ ...th, redistribution: corner.redistribution, phaseIntegral: corner.phaseIntegral }));
