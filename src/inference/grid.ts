@@ -35,6 +35,11 @@ export interface GridResult {
   masses: Array<MassPrediction | undefined>;
   /** Node likelihoods, row i = draw i, scaled so the row maximum is 1. */
   rows: Float64Array;
+  /**
+   * Cumulative trapezoid masses of the cells of each row (row i at i * (nodes - 1)),
+   * so posterior sampling finds a cell by binary search.
+   */
+  cells: Float64Array;
   /** Normalised evidence weight of each draw. */
   weights: Float64Array;
   /** Whether the model eclipse depth decreases somewhere along the grid, per draw. */
@@ -54,6 +59,7 @@ export function lnAlbedoFactors(nodes: number): Float64Array {
 export function runGrid(draws: Nuisance[], settings: ModelSettings, lik: Likelihoods, nodes: number): GridResult {
   const n = draws.length;
   const rows = new Float64Array(n * nodes);
+  const cells = new Float64Array(n * (nodes - 1));
   const logZ = new Float64Array(n);
   const depthFalls = new Uint8Array(n);
   const models: DrawModel[] = new Array(n);
@@ -137,17 +143,25 @@ export function runGrid(draws: Nuisance[], settings: ModelSettings, lik: Likelih
       continue;
     }
     let trap = 0;
+    let cum = 0;
+    let prev = 0;
+    const cellBase = i * (nodes - 1) - 1;
     for (let j = 0; j < nodes; j++) {
       const d = logL[j]! - rowMax;
       // e^-60 ~ 1e-26: such nodes carry no weight; skipping the exp saves time.
       const v = d > -60 ? Math.exp(d) : 0;
       rows[base + j] = v;
       trap += v;
+      if (j > 0) {
+        cum += prev + v;
+        cells[cellBase + j] = cum;
+      }
+      prev = v;
     }
     trap -= 0.5 * (rows[base]! + rows[base + nodes - 1]!);
     logZ[i] = rowMax + Math.log(trap * inv);
   }
-  return { nodes, draws, models, masses, rows, weights: normaliseLogWeights(logZ), depthFalls, maxDepthPpm, maxAmplitudePpm };
+  return { nodes, draws, models, masses, rows, cells, weights: normaliseLogWeights(logZ), depthFalls, maxDepthPpm, maxAmplitudePpm };
 }
 
 /** exp(logZ - max) normalised to sum 1; all zeros if no draw has support. */

@@ -12,7 +12,7 @@ import { assumptionLines } from './assumptions.ts';
 import { effectiveSampleSize, runGrid } from './grid.ts';
 import { significanceSigma } from './likelihood.ts';
 import { drawMeasurement, likelihoodsOf } from './measurements.ts';
-import { type Nuisance, drawNuisance } from './nuisance.ts';
+import { type Nuisance, drawNuisance, withCorner } from './nuisance.ts';
 import { createRng, type Rng } from './random.ts';
 import { samplePosterior } from './sample-posterior.ts';
 import type { ModelSettings } from './signal-model.ts';
@@ -62,7 +62,7 @@ function sensitivity(s: SystemInput, draws: Nuisance[], settings: ModelSettings,
   const count = Math.max(250, Math.floor(draws.length / 16));
   const subset = draws.slice(0, count);
   return SENSITIVITY_CORNERS.map((corner, c) => {
-    const fixed = subset.map((th) => ({ ...th, redistribution: corner.redistribution, phaseIntegral: corner.phaseIntegral }));
+    const fixed = subset.map((th) => withCorner(th, corner.redistribution, corner.phaseIntegral));
     const grid = runGrid(fixed, settings, lik, Math.max(64, Math.floor(s.assumptions.gridNodes / 4)));
     if (!grid.weights.some((w) => w > 0)) {
       return { ...corner, geometricAlbedo: summarize([NaN]) };

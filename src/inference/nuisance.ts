@@ -22,14 +22,31 @@ export interface Nuisance {
   phaseIntegral: number;
   limbDarkeningU: number;
   gravityDarkeningG: number;
-  /** Present when the planet and star masses and the period are known or derivable. */
-  planetMassKg?: number;
-  starMassKg?: number;
-  periodS?: number;
+  /** Set when the planet and star masses and the period are known or derivable. */
+  planetMassKg: number | undefined;
+  starMassKg: number | undefined;
+  periodS: number | undefined;
 }
 
 const MAX_GEOMETRY_REDRAWS = 1000;
 const DEG = Math.PI / 180;
+
+/** The same draw at fixed heat redistribution and phase integral (sensitivity corners), with the same object shape. */
+export function withCorner(n: Nuisance, redistribution: number, phaseIntegral: number): Nuisance {
+  return {
+    teffK: n.teffK,
+    radiusRatio: n.radiusRatio,
+    scaledSemiMajorAxis: n.scaledSemiMajorAxis,
+    inclinationRad: n.inclinationRad,
+    redistribution,
+    phaseIntegral,
+    limbDarkeningU: n.limbDarkeningU,
+    gravityDarkeningG: n.gravityDarkeningG,
+    planetMassKg: n.planetMassKg,
+    starMassKg: n.starMassKg,
+    periodS: n.periodS,
+  };
+}
 
 /** Draws theta; throws out-of-range naming the fields when no valid geometry can be drawn. */
 export function drawNuisance(s: SystemInput, rng: Rng): Nuisance {
@@ -74,11 +91,15 @@ export function drawNuisance(s: SystemInput, rng: Rng): Nuisance {
       phaseIntegral: d('assumptions.phaseIntegral', a.phaseIntegral, ASSUMPTION_FIELDS.phaseIntegral.range)!,
       limbDarkeningU: d('assumptions.limbDarkening', a.limbDarkening, ASSUMPTION_FIELDS.limbDarkening.range)!,
       gravityDarkeningG: d('assumptions.gravityDarkening', a.gravityDarkening, ASSUMPTION_FIELDS.gravityDarkening.range)!,
+      // Always present (undefined when unknown), so every draw has the same object shape
+      // and the grid loop stays monomorphic.
+      planetMassKg: undefined,
+      starMassKg: undefined,
+      periodS,
     };
     if (mPlanetKg !== undefined && mStarKg !== undefined && periodS !== undefined) {
       n.planetMassKg = mPlanetKg;
       n.starMassKg = mStarKg;
-      n.periodS = periodS;
     }
     return n;
   }

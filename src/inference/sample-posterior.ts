@@ -22,12 +22,17 @@ export interface PosteriorDraws {
 
 /** Index i with probability cumulative[i] - cumulative[i-1] (binary search). */
 export function pickCumulative(cumulative: Float64Array, u: number): number {
+  return pickCumulativeIn(cumulative, 0, cumulative.length, u);
+}
+
+/** pickCumulative on cumulative[offset .. offset + length), returning an index into that range. */
+export function pickCumulativeIn(cumulative: Float64Array, offset: number, length: number, u: number): number {
   let lo = 0;
-  let hi = cumulative.length - 1;
-  const target = u * cumulative[hi]!;
+  let hi = length - 1;
+  const target = u * cumulative[offset + hi]!;
   while (lo < hi) {
     const mid = (lo + hi) >>> 1;
-    if (cumulative[mid]! > target) hi = mid;
+    if (cumulative[offset + mid]! > target) hi = mid;
     else lo = mid + 1;
   }
   return lo;
@@ -47,7 +52,6 @@ export function samplePosterior(grid: GridResult, settings: ModelSettings, rng: 
   const cum = new Float64Array(weights.length);
   let s = 0;
   for (let i = 0; i < weights.length; i++) cum[i] = s += weights[i]!;
-  const cellCum = new Float64Array(nodes - 1);
   const out: PosteriorDraws = {
     count,
     drawIndex: new Int32Array(count),
@@ -62,9 +66,7 @@ export function samplePosterior(grid: GridResult, settings: ModelSettings, rng: 
   for (let k = 0; k < count; k++) {
     const i = pickCumulative(cum, rng.uniform());
     const base = i * nodes;
-    let c = 0;
-    for (let j = 0; j < nodes - 1; j++) cellCum[j] = c += rows[base + j]! + rows[base + j + 1]!;
-    const cell = pickCumulative(cellCum, rng.uniform());
+    const cell = pickCumulativeIn(grid.cells, i * (nodes - 1), nodes - 1, rng.uniform());
     const t = linearCellPosition(rows[base + cell]!, rows[base + cell + 1]!, rng.uniform());
     const th = grid.draws[i]!;
     const dm = grid.models[i]!;
