@@ -11,6 +11,8 @@ import type { Interpretation } from '../index.ts';
 export interface Interpreter {
   /** Interprets a system-file JSON value that has already passed validation. */
   run(system: unknown, catalog: CatalogSnapshot): Promise<Interpretation>;
+  /** The same as JSON text, when the interpreter can produce it more cheaply than run + stringify. */
+  runJson?(system: unknown, catalog: CatalogSnapshot): Promise<string>;
   /** The write-up (paragraphs, BibTeX, figure) of a validated system-file JSON value. */
   report(system: unknown, catalog: CatalogSnapshot, format: ReportFormat): Promise<ReportResult>;
   close(): Promise<void>;
@@ -31,6 +33,7 @@ export async function pooledInterpreter(workers: number): Promise<Interpreter> {
   await pool.ready();
   return {
     run: (system, catalog) => pool.run(system, catalog),
+    runJson: (system, catalog) => pool.runJson(system, catalog),
     report: (system, catalog, format) => pool.report(system, catalog, format),
     close: () => pool.close(),
   };

@@ -15,7 +15,8 @@ export interface CatalogSnapshot {
   sources: readonly SourceRecord[];
 }
 
-export type Job = { kind: 'interpret' } | { kind: 'report'; format: ReportFormat };
+/** `interpret-json` answers with the interpretation as JSON text (cheaper to pass between threads). */
+export type Job = { kind: 'interpret' } | { kind: 'interpret-json' } | { kind: 'report'; format: ReportFormat };
 
 export interface TaskMessage {
   id: number;
@@ -34,7 +35,7 @@ export interface FailureData {
   stack?: string;
 }
 
-export type JobResult = Interpretation | ReportResult;
+export type JobResult = Interpretation | ReportResult | string;
 
 export type ResultMessage =
   | { id: number; ok: true; result: JobResult }

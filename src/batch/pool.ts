@@ -68,6 +68,11 @@ export class InterpretPool {
     return this.submit({ kind: 'interpret' }, system, catalog) as Promise<Interpretation>;
   }
 
+  /** As run, answered as JSON text: the worker serialises, so no object graph crosses threads. */
+  runJson(system: unknown, catalog?: CatalogSnapshot): Promise<string> {
+    return this.submit({ kind: 'interpret-json' }, system, catalog) as Promise<string>;
+  }
+
   /** The write-up of one system (paragraphs, BibTeX, figure) on the next free worker. */
   report(system: unknown, catalog: CatalogSnapshot | undefined, format: ReportFormat): Promise<ReportResult> {
     return this.submit({ kind: 'report', format }, system, catalog) as Promise<ReportResult>;

@@ -27,7 +27,12 @@ function failureOf(e: unknown): FailureData {
 async function answer(task: TaskMessage): Promise<ResultMessage> {
   try {
     const catalog = catalogFor(task);
-    const result: JobResult = task.job.kind === 'report' ? await reportJob(task.system, catalog, task.job.format) : interpretJob(task.system, catalog);
+    const job = task.job;
+    const result: JobResult = job.kind === 'report'
+      ? await reportJob(task.system, catalog, job.format)
+      : job.kind === 'interpret-json'
+        ? JSON.stringify(interpretJob(task.system, catalog))
+        : interpretJob(task.system, catalog);
     return { id: task.id, ok: true, result };
   } catch (e) {
     return { id: task.id, ok: false, failure: failureOf(e) };

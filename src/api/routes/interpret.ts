@@ -20,7 +20,13 @@ export async function readSystemBody(c: Context): Promise<unknown> {
 export function interpretRoutes(app: Hono, deps: ApiDeps): void {
   app.post('/api/interpret', async (c) => {
     const json = await readSystemBody(c);
-    const result = await deps.interpreter.run(json, deps.snapshots.current());
+    const snapshot = deps.snapshots.current();
+    if (deps.interpreter.runJson) {
+      // Serialised in the worker thread; the text is the same JSON c.json would write.
+      const text = await deps.interpreter.runJson(json, snapshot);
+      return c.body(text, 200, { 'Content-Type': 'application/json' });
+    }
+    const result = await deps.interpreter.run(json, snapshot);
     return c.json(conformsToSchema(result));
   });
 }
