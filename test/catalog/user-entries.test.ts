@@ -2,6 +2,7 @@ import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { HesperError } from '../../src/errors.ts';
 import { catalogEntryInputSchema, openCatalog, type Catalog } from '../../src/catalog/index.ts';
 import { cleanupTemp, dumpDatabase, tempDbPath, userEntry } from './helpers.ts';
+import { caughtHesperError } from '../helpers/errors.ts';
 
 let catalog: Catalog;
 let file: string;
@@ -14,15 +15,6 @@ afterEach(() => {
   cleanupTemp();
 });
 
-function caught(fn: () => unknown): HesperError {
-  try {
-    fn();
-  } catch (e) {
-    if (e instanceof HesperError) return e;
-    throw e;
-  }
-  throw new Error('expected a HesperError');
-}
 
 describe('user entries', () => {
   it('adds an entry citing an existing key and lists it with origin user', () => {
@@ -41,30 +33,30 @@ describe('user entries', () => {
   });
 
   it('refuses a source record whose key exists with other details', () => {
-    const err = caught(() => catalog.addUserEntry(userEntry('invented-x', { sources: [{ key: 'Essack2020', authors: 'Someone', title: 'Another title' }] })));
+    const err = caughtHesperError(() => catalog.addUserEntry(userEntry('invented-x', { sources: [{ key: 'Essack2020', authors: 'Someone', title: 'Another title' }] })));
     expect(err.code).toBe('duplicate-id');
     expect(err.kind).toBe('conflict');
     expect(err.issues[0]!.path).toBe('sources[0]');
   });
 
   it('refuses an unknown source key, a taken id and an entry without sources, naming the field', () => {
-    expect(caught(() => catalog.addUserEntry(userEntry('invented-y', { sources: ['NoSuch2001'] }))).issues[0]).toMatchObject({ path: 'sources[0]', value: 'NoSuch2001' });
-    expect(caught(() => catalog.addUserEntry(userEntry('jupiter-bond-li2018'))).code).toBe('duplicate-id');
-    const noSource = caught(() => catalog.addUserEntry(userEntry('invented-z', { sources: [] })));
+    expect(caughtHesperError(() => catalog.addUserEntry(userEntry('invented-y', { sources: ['NoSuch2001'] }))).issues[0]).toMatchObject({ path: 'sources[0]', value: 'NoSuch2001' });
+    expect(caughtHesperError(() => catalog.addUserEntry(userEntry('jupiter-bond-li2018'))).code).toBe('duplicate-id');
+    const noSource = caughtHesperError(() => catalog.addUserEntry(userEntry('invented-z', { sources: [] })));
     expect(noSource.code).toBe('invalid-input');
     expect(noSource.issues[0]).toMatchObject({ path: 'sources', message: 'at least one source is required' });
   });
 
   it('validates ranges, bands and enums with one issue per field', () => {
-    const err = caught(() =>
+    const err = caughtHesperError(() =>
       catalog.addUserEntry(userEntry('invented-bad', { valueMin: 0.5, valueMax: 0.2, bandMinNm: 900, bandMaxNm: 400, quantity: 'bond', category: 'plasma' })),
     );
     const paths = err.issues.map((i) => i.path);
     expect(paths).toContain('category');
     expect(new Set(paths).size).toBe(paths.length);
-    const ranges = caught(() => catalog.addUserEntry(userEntry('invented-bad', { valueMin: 0.5, valueMax: 0.2, bandMinNm: 900, bandMaxNm: 400 })));
+    const ranges = caughtHesperError(() => catalog.addUserEntry(userEntry('invented-bad', { valueMin: 0.5, valueMax: 0.2, bandMinNm: 900, bandMaxNm: 400 })));
     expect(ranges.issues.map((i) => i.path).sort()).toEqual(['bandMaxNm', 'valueMin']);
-    const bond = caught(() => catalog.addUserEntry(userEntry('invented-bad', { quantity: 'bond', valueMax: 1.2 })));
+    const bond = caughtHesperError(() => catalog.addUserEntry(userEntry('invented-bad', { quantity: 'bond', valueMax: 1.2 })));
     expect(bond.issues[0]).toMatchObject({ path: 'valueMax' });
     expect(bond.issues[0]!.message).toContain('cannot exceed 1');
     expect(catalog.listEntries({ origin: 'user' })).toEqual([]);
@@ -81,22 +73,22 @@ describe('user entries', () => {
     catalog.addUserEntry(userEntry('invented-upd', { spectrum: [{ wavelengthNm: 500, value: 0.12 }] }));
     const changed = catalog.updateUserEntry('invented-upd', { valueNominal: 0.18, sources: ['Essack2020', 'Hu2012'] });
     expect(changed).toMatchObject({ valueNominal: 0.18, sources: ['Essack2020', 'Hu2012'], spectrum: [{ wavelengthNm: 500, value: 0.12 }] });
-    expect(caught(() => catalog.updateUserEntry('invented-upd', { valueNominal: 0.5 })).issues[0]!.path).toBe('valueNominal');
-    expect(caught(() => catalog.updateUserEntry('invented-upd', { id: 'renamed' })).code).toBe('invalid-input');
+    expect(caughtHesperError(() => catalog.updateUserEntry('invented-upd', { valueNominal: 0.5 })).issues[0]!.path).toBe('valueNominal');
+    expect(caughtHesperError(() => catalog.updateUserEntry('invented-upd', { id: 'renamed' })).code).toBe('invalid-input');
   });
 
   it('refuses to edit or remove curated rows (kind forbidden) and reports unknown ids (kind not-found)', () => {
     const before = dumpDatabase(file);
-    const edit = caught(() => catalog.updateUserEntry('jupiter-bond-li2018', { valueNominal: 0.5 }));
+    const edit = caughtHesperError(() => catalog.updateUserEntry('jupiter-bond-li2018', { valueNominal: 0.5 }));
     expect([edit.code, edit.kind]).toEqual(['curated-row', 'forbidden']);
-    const remove = caught(() => catalog.removeUserEntry('jupiter-bond-li2018'));
+    const remove = caughtHesperError(() => catalog.removeUserEntry('jupiter-bond-li2018'));
     expect([remove.code, remove.kind]).toEqual(['curated-row', 'forbidden']);
     expect(remove.message).toContain('curated');
     expect(dumpDatabase(file)).toEqual(before);
     for (const fn of [() => catalog.getEntry('no-such-entry'), () => catalog.removeUserEntry('no-such-entry'), () => catalog.updateUserEntry('no-such-entry', {})]) {
-      expect(caught(fn)).toMatchObject({ code: 'not-found', kind: 'not-found' });
+      expect(caughtHesperError(fn)).toMatchObject({ code: 'not-found', kind: 'not-found' });
     }
-    expect(caught(() => catalog.getSources(['Li2018Jupiter', 'Nope1', 'Nope2'])).issues.map((i) => i.value)).toEqual(['Nope1', 'Nope2']);
+    expect(caughtHesperError(() => catalog.getSources(['Li2018Jupiter', 'Nope1', 'Nope2'])).issues.map((i) => i.value)).toEqual(['Nope1', 'Nope2']);
   });
 
   it('removes a user entry with its links and spectrum', () => {
@@ -107,7 +99,7 @@ describe('user entries', () => {
   });
 
   it('rejects an unknown category filter with the allowed words', () => {
-    const err = caught(() => catalog.listEntries({ category: 'plasma' }));
+    const err = caughtHesperError(() => catalog.listEntries({ category: 'plasma' }));
     expect(err.issues[0]).toMatchObject({ path: 'category', value: 'plasma' });
     expect(err.issues[0]!.allowed).toContain('clear-atmosphere');
   });

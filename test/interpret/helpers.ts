@@ -1,4 +1,7 @@
 /** Invented catalog entries, synthetic posteriors and the seeded catalog for the interpretation tests. */
+import type { MatchContext } from '../../src/interpret/match.ts';
+import type { PlanetClassReading } from '../../src/interpret/types.ts';
+import { resolveBand } from '../../src/physics/bandpass.ts';
 import type { CatalogEntry } from '../../src/catalog/index.ts';
 import { openCatalog } from '../../src/catalog/index.ts';
 import { curveMap, type FeasibilityContext } from '../../src/interpret/feasibility.ts';
@@ -55,4 +58,23 @@ export function seededCatalog() {
     cleanupTemp();
   }
   return seeded;
+}
+
+/** A giant planet, by its radius (invented test value). */
+export const GIANT: PlanetClassReading = { planetClass: 'giant', basis: 'radius', radiusRearth: 11, text: 'planet class giant (gas-rich)' };
+
+/**
+ * A matching context in the TESS band for a giant with A_g uniform on `ag`, T_day
+ * uniform on 1400-1500 K and T_eq on 1200-1300 K (invented test values).
+ */
+export function matchContext(ag: [number, number], over: Partial<MatchContext> = {}): MatchContext {
+  return {
+    band: resolveBand('tess'),
+    planetClass: GIANT,
+    phaseIntegral: { kind: 'uniform', min: 1, max: 1.5 },
+    geometricAlbedo: uniformSummary(...ag),
+    quantiles: { geometricAlbedo: uniformGrid(...ag), daysideTemperatureK: uniformGrid(1400, 1500), equilibriumTemperatureK: uniformGrid(1200, 1300) },
+    feasibility: temperatures([1400, 1500], [1200, 1300]),
+    ...over,
+  };
 }

@@ -1,23 +1,12 @@
 import { describe, expect, it } from 'vitest';
 import { matchCatalog, matchEntry, type MatchContext } from '../../src/interpret/match.ts';
-import type { PlanetClassReading } from '../../src/interpret/types.ts';
-import { resolveBand } from '../../src/physics/bandpass.ts';
-import { entry, temperatures, uniformGrid, uniformSummary } from './helpers.ts';
+import { entry, GIANT, matchContext, temperatures, uniformGrid } from './helpers.ts';
 
-const giant: PlanetClassReading = { planetClass: 'giant', basis: 'radius', radiusRearth: 11, text: 'planet class giant (gas-rich)' };
+const giant = GIANT;
 
 /** A_g uniform on [0.2, 0.46]: derived 95 % interval 0.2065-0.4535, printed 0.21-0.45. */
 function context(over: Partial<MatchContext> = {}): MatchContext {
-  const ag: [number, number] = [0.2, 0.46];
-  return {
-    band: resolveBand('tess'),
-    planetClass: giant,
-    phaseIntegral: { kind: 'uniform', min: 1, max: 1.5 },
-    geometricAlbedo: uniformSummary(...ag),
-    quantiles: { geometricAlbedo: uniformGrid(...ag), daysideTemperatureK: uniformGrid(1400, 1500), equilibriumTemperatureK: uniformGrid(1200, 1300) },
-    feasibility: temperatures([1400, 1500], [1200, 1300]),
-    ...over,
-  };
+  return matchContext([0.2, 0.46], over);
 }
 
 describe('matching catalog entries to the posterior', () => {

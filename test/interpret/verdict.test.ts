@@ -2,23 +2,14 @@ import { describe, expect, it } from 'vitest';
 import { interpretSystem } from '../../src/interpret/run.ts';
 import { matchCatalog, type MatchContext } from '../../src/interpret/match.ts';
 import { planetClassOf } from '../../src/interpret/planet-class.ts';
-import type { PlanetClassReading } from '../../src/interpret/types.ts';
 import { decideVerdict } from '../../src/interpret/verdict.ts';
-import { resolveBand } from '../../src/physics/bandpass.ts';
 import { demoJson, loadDemo, parseJson } from '../inference/helpers.ts';
-import { entry, seededCatalog, temperatures, uniformGrid, uniformSummary } from './helpers.ts';
+import { entry, GIANT, matchContext, seededCatalog } from './helpers.ts';
 
-const giant: PlanetClassReading = { planetClass: 'giant', basis: 'radius', radiusRearth: 11, text: 'planet class giant (gas-rich)' };
+const giant = GIANT;
 
 function ctx(ag: [number, number]): MatchContext {
-  return {
-    band: resolveBand('tess'),
-    planetClass: giant,
-    phaseIntegral: { kind: 'uniform', min: 1, max: 1.5 },
-    geometricAlbedo: uniformSummary(...ag),
-    quantiles: { geometricAlbedo: uniformGrid(...ag), daysideTemperatureK: uniformGrid(1400, 1500), equilibriumTemperatureK: uniformGrid(1200, 1300) },
-    feasibility: temperatures([1400, 1500], [1200, 1300]),
-  };
+  return matchContext(ag);
 }
 
 /** Invented cloud-free references: a tested one (window) with A_g up to 0.2, an untested idealised one at 0.8. */

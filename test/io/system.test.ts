@@ -1,20 +1,14 @@
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
-import { HesperError } from '../../src/errors.ts';
 import { parseSystem } from '../../src/io/system.ts';
 import { loadSystemFile } from '../../src/io/system-file.ts';
+import { caughtHesperError } from '../helpers/errors.ts';
 
 const demo = (name: string) => JSON.parse(readFileSync(new URL(`../../demo-data/systems/${name}`, import.meta.url), 'utf8'));
 const fixturesDir = new URL('../../demo-data/fixtures/', import.meta.url).pathname;
 
 function issuesOf(fn: () => unknown): Array<{ path: string; message: string }> {
-  try {
-    fn();
-  } catch (e) {
-    expect(e).toBeInstanceOf(HesperError);
-    return (e as HesperError).issues;
-  }
-  throw new Error('expected a HesperError');
+  return caughtHesperError(fn).issues;
 }
 
 describe('system file: quantity forms and units', () => {

@@ -1,19 +1,10 @@
 import { describe, expect, it } from 'vitest';
-import { HesperError } from '../../src/errors.ts';
 import {
   bandFlux, bandFluxDirect, bandFluxRatio, builtinBandIds, describeBand, getBandTable, listBuiltinBands, logBandFlux,
   resolveBand,
 } from '../../src/physics/bandpass.ts';
+import { caughtHesperError } from '../helpers/errors.ts';
 
-function errorOf(fn: () => unknown): HesperError {
-  try {
-    fn();
-  } catch (e) {
-    if (e instanceof HesperError) return e;
-    throw e;
-  }
-  throw new Error('expected a HesperError');
-}
 
 describe('built-in bands', () => {
   it('lists at least kepler, tess, cheops, most, corot, V, R, I with coverage, source and the approximate flag', () => {
@@ -56,18 +47,18 @@ describe('built-in bands', () => {
 
 describe('resolveBand errors', () => {
   it('lists the known names for an unknown band', () => {
-    const e = errorOf(() => resolveBand('spitzer', 'system.band'));
+    const e = caughtHesperError(() => resolveBand('spitzer', 'system.band'));
     expect(e.code).toBe('unknown-band');
     expect(e.issues[0]?.path).toBe('system.band');
     expect(e.issues[0]?.message).toMatch(/kepler, tess, cheops, most, corot, V, R, I/);
   });
 
   it('rejects bad top-hats and curves', () => {
-    expect(errorOf(() => resolveBand({ tophatNm: [800, 600] })).code).toBe('out-of-range');
-    expect(errorOf(() => resolveBand({ tophatNm: [Number.NaN, 600] })).issues[0]?.path).toBe('band.tophatNm[0]');
-    expect(errorOf(() => resolveBand({ response: [[500, 1]] })).code).toBe('bad-response-curve');
-    expect(errorOf(() => resolveBand({ response: [[500, 1], [450, 1]] }, 'x')).issues[0]?.path).toBe('x.response[1]');
-    expect(errorOf(() => resolveBand({ foo: 1 } as never)).code).toBe('invalid-input');
+    expect(caughtHesperError(() => resolveBand({ tophatNm: [800, 600] })).code).toBe('out-of-range');
+    expect(caughtHesperError(() => resolveBand({ tophatNm: [Number.NaN, 600] })).issues[0]?.path).toBe('band.tophatNm[0]');
+    expect(caughtHesperError(() => resolveBand({ response: [[500, 1]] })).code).toBe('bad-response-curve');
+    expect(caughtHesperError(() => resolveBand({ response: [[500, 1], [450, 1]] }, 'x')).issues[0]?.path).toBe('x.response[1]');
+    expect(caughtHesperError(() => resolveBand({ foo: 1 } as never)).code).toBe('invalid-input');
   });
 });
 
@@ -99,11 +90,11 @@ describe('band flux API', () => {
   });
 
   it('rejects bad temperatures and weightings', () => {
-    expect(errorOf(() => bandFlux(tess, -1)).issues[0]).toMatchObject({ path: 'temperatureK', value: -1 });
-    expect(errorOf(() => bandFlux(tess, Number.NaN)).code).toBe('not-finite');
-    expect(errorOf(() => bandFlux(tess, Infinity)).code).toBe('not-finite');
-    expect(errorOf(() => bandFluxRatio(tess, 1500, 0)).issues[0]?.path).toBe('starTempK');
-    expect(errorOf(() => bandFlux(tess, 1500, 'bolometric' as 'photon')).issues[0]?.path).toBe('weighting');
-    expect(errorOf(() => bandFluxDirect(tess, 30000, 'bolometric' as 'photon')).issues[0]?.path).toBe('weighting');
+    expect(caughtHesperError(() => bandFlux(tess, -1)).issues[0]).toMatchObject({ path: 'temperatureK', value: -1 });
+    expect(caughtHesperError(() => bandFlux(tess, Number.NaN)).code).toBe('not-finite');
+    expect(caughtHesperError(() => bandFlux(tess, Infinity)).code).toBe('not-finite');
+    expect(caughtHesperError(() => bandFluxRatio(tess, 1500, 0)).issues[0]?.path).toBe('starTempK');
+    expect(caughtHesperError(() => bandFlux(tess, 1500, 'bolometric' as 'photon')).issues[0]?.path).toBe('weighting');
+    expect(caughtHesperError(() => bandFluxDirect(tess, 30000, 'bolometric' as 'photon')).issues[0]?.path).toBe('weighting');
   });
 });

@@ -1,16 +1,7 @@
 import { describe, expect, it } from 'vitest';
-import { HesperError } from '../../src/errors.ts';
 import { parseResponseCsv, validateResponsePairs } from '../../src/physics/response-curve.ts';
+import { caughtHesperError } from '../helpers/errors.ts';
 
-function errorOf(fn: () => unknown): HesperError {
-  try {
-    fn();
-  } catch (e) {
-    if (e instanceof HesperError) return e;
-    throw e;
-  }
-  throw new Error('expected a HesperError');
-}
 
 describe('parseResponseCsv', () => {
   it('reads nm and um headers, skipping comments and blank lines', () => {
@@ -21,21 +12,21 @@ describe('parseResponseCsv', () => {
   });
 
   it('rejects a bad header with its line number', () => {
-    const e = errorOf(() => parseResponseCsv('\nlambda,transmission\n500,1\n600,1\n', 'f.csv'));
+    const e = caughtHesperError(() => parseResponseCsv('\nlambda,transmission\n500,1\n600,1\n', 'f.csv'));
     expect(e.code).toBe('bad-response-curve');
     expect(e.issues[0]?.path).toBe('f.csv:2');
     expect(e.issues[0]?.message).toMatch(/line 2: header/);
   });
 
   it('rejects an empty file and a single point', () => {
-    expect(errorOf(() => parseResponseCsv('', 'e.csv')).issues[0]?.message).toMatch(/empty/);
-    expect(errorOf(() => parseResponseCsv('wavelength_nm,weight\n', 'e.csv')).issues[0]?.message).toMatch(/no data points/);
-    expect(errorOf(() => parseResponseCsv('wavelength_nm,weight\n500,1\n', 'e.csv')).issues[0]?.message).toMatch(/at least 2/);
+    expect(caughtHesperError(() => parseResponseCsv('', 'e.csv')).issues[0]?.message).toMatch(/empty/);
+    expect(caughtHesperError(() => parseResponseCsv('wavelength_nm,weight\n', 'e.csv')).issues[0]?.message).toMatch(/no data points/);
+    expect(caughtHesperError(() => parseResponseCsv('wavelength_nm,weight\n500,1\n', 'e.csv')).issues[0]?.message).toMatch(/at least 2/);
   });
 
   it('rejects non-increasing wavelengths, negative and non-finite weights, each with its line', () => {
     const text = 'wavelength_nm,weight\n500,1\n600,1\n600,1\n550,1\n700,-0.1\n800,Infinity\n900,abc\n';
-    const e = errorOf(() => parseResponseCsv(text, 'g.csv'));
+    const e = caughtHesperError(() => parseResponseCsv(text, 'g.csv'));
     expect(e.code).toBe('bad-response-curve');
     const byPath = new Map(e.issues.map((i) => [i.path, i.message]));
     expect(byPath.get('g.csv:4')).toMatch(/not greater than the previous 600 nm/);
@@ -46,13 +37,13 @@ describe('parseResponseCsv', () => {
   });
 
   it('rejects rows with the wrong number of cells and all-zero curves', () => {
-    expect(errorOf(() => parseResponseCsv('wavelength_nm,weight\n500,1,2\n600,1\n', 'h.csv')).issues[0]?.path).toBe('h.csv:2');
-    expect(errorOf(() => parseResponseCsv('wavelength_nm,weight\n500,0\n600,0\n', 'h.csv')).issues[0]?.message).toMatch(/every weight is zero/);
+    expect(caughtHesperError(() => parseResponseCsv('wavelength_nm,weight\n500,1,2\n600,1\n', 'h.csv')).issues[0]?.path).toBe('h.csv:2');
+    expect(caughtHesperError(() => parseResponseCsv('wavelength_nm,weight\n500,0\n600,0\n', 'h.csv')).issues[0]?.message).toMatch(/every weight is zero/);
   });
 
   it('flags wavelengths that look like a unit mistake', () => {
     // 0.5 "nm" is almost certainly micrometres given under the nm header.
-    const e = errorOf(() => parseResponseCsv('wavelength_nm,weight\n0.5,1\n0.6,1\n', 'u.csv'));
+    const e = caughtHesperError(() => parseResponseCsv('wavelength_nm,weight\n0.5,1\n0.6,1\n', 'u.csv'));
     expect(e.issues[0]?.message).toMatch(/check the unit/);
   });
 });
@@ -60,10 +51,10 @@ describe('parseResponseCsv', () => {
 describe('validateResponsePairs', () => {
   it('accepts nm and um and names bad points by index', () => {
     expect(validateResponsePairs([[0.5, 1], [0.6, 1]], 'um')[1]?.[0]).toBeCloseTo(600, 9);
-    const e = errorOf(() => validateResponsePairs([[500, 1], [400, 1]], 'nm', 'band.response'));
+    const e = caughtHesperError(() => validateResponsePairs([[500, 1], [400, 1]], 'nm', 'band.response'));
     expect(e.issues[0]?.path).toBe('band.response[1]');
-    expect(errorOf(() => validateResponsePairs([[500, 1], ['600', 1]])).issues[0]?.path).toBe('band.response[1]');
-    expect(errorOf(() => validateResponsePairs('500,1')).code).toBe('bad-response-curve');
-    expect(errorOf(() => validateResponsePairs([[500, 1], [600, 1]], 'mm' as 'nm')).issues[0]?.path).toBe('band.response.unit');
+    expect(caughtHesperError(() => validateResponsePairs([[500, 1], ['600', 1]])).issues[0]?.path).toBe('band.response[1]');
+    expect(caughtHesperError(() => validateResponsePairs('500,1')).code).toBe('bad-response-curve');
+    expect(caughtHesperError(() => validateResponsePairs([[500, 1], [600, 1]], 'mm' as 'nm')).issues[0]?.path).toBe('band.response.unit');
   });
 });
