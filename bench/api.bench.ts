@@ -1,5 +1,5 @@
 /**
- * API and batch figures (issue 6), printed, never asserted:
+ * API and batch figures, printed, never asserted:
  *  - interpretations per second at 8 concurrent clients against `hesper serve` started
  *    on loopback at its default settings (workers = cores) with the invented demo
  *    systems at their default draws; target >= 30 /s with zero errors;

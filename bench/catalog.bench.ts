@@ -1,5 +1,5 @@
 /**
- * Catalog timings (issue 4): first use of a new database file (create + migrate + seed)
+ * Catalog timings: first use of a new database file (create + migrate + seed)
  * in-process, opening an up-to-date file, and the whole `hesper catalog list --json`
  * process. Medians; printed by `npm run bench`, never asserted.
  */

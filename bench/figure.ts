@@ -3,7 +3,7 @@ export interface Figure {
   name: string;
   value: number;
   unit: string;
-  /** Target from the issue; lower is better unless lowerIsBetter is false. */
+  /** Target; lower is better unless lowerIsBetter is false. */
   target?: number;
   lowerIsBetter?: boolean;
   digits?: number;

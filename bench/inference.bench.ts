@@ -1,5 +1,5 @@
 /**
- * The main job's figures (issue on the main job): in-process interpretation at the
+ * The main job's figures: in-process interpretation at the
  * defaults (4000 draws x 256 grid nodes), whole-process `hesper interpret FILE --json`,
  * and the peak memory of that process.
  */

@@ -1,6 +1,6 @@
 /**
- * Interpretation figures: matching the whole curated catalog to one posterior (issue 5:
- * "a few ms" for ~100+ entries; target 5 ms, our reading of "a few"), the H-function
+ * Interpretation figures: matching the whole curated catalog to one posterior (target 5 ms
+ * for a few hundred entries), the H-function
  * solve and inversion, the write-up and the SVG figure.
  */
 import { openCatalog } from '../src/catalog/index.ts';

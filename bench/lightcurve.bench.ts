@@ -1,4 +1,4 @@
-/** Light-curve decomposition (issue 7): a 100 000-point time series, target under 1 s. */
+/** Light-curve decomposition: a 100 000-point time series, target under 1 s. */
 import { decompose, type DecomposeOptions } from '../src/lightcurve/decompose.ts';
 import { cosinePlanet, syntheticTimeSeries, type SyntheticSpec } from '../test/lightcurve/synthetic.ts';
 import { type Figure, medianMs } from './figure.ts';

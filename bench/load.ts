@@ -1,6 +1,6 @@
 /**
- * `npm run load`: a bounded load run against a server this script starts on loopback
- * (issue on reliability). Concurrent clients send interpret requests and catalog reads
+ * `npm run load`: a bounded load run against a server this script starts on loopback.
+ * Concurrent clients send interpret requests and catalog reads
  * (and a few user-entry writes) until a request count or a time limit is reached,
  * whichever comes first. Reports throughput, p50/p99 latency, errors, and the server's
  * resident memory in the first and last tenth of the run (growth must stay under 20 %).

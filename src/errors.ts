@@ -1,5 +1,5 @@
 /**
- * Errors are data (STYLE.md habit 8): a machine `code`, and one or more issues that
+ * Errors are data: a machine `code`, and one or more issues that
  * each name the path of the offending field, the value and what is allowed.
  *
  * This file is the lowest layer: every other layer may import it, it imports nothing.

@@ -1,6 +1,6 @@
 import { afterEach, beforeEach, vi } from 'vitest';
 
-// A warning is a failure unless the test expects it (STYLE.md habit 18).
+// A warning is a failure unless the test expects it.
 // Tests that want console output spy on console themselves; this guard only
 // catches writes nobody asked for.
 const methods = ['log', 'info', 'warn', 'error', 'debug'] as const;

@@ -1,5 +1,5 @@
 /**
- * The HTTP API as a hono app (DESIGN section 7). `createApp` takes the open catalog and
+ * The HTTP API as a hono app. `createApp` takes the open catalog and
  * returns the app, so tests drive it in-process with `app.request()` and `hesper serve`
  * hands it to @hono/node-server.
  */

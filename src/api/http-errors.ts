@@ -1,5 +1,5 @@
 /**
- * From failures to answers (STYLE.md habit 10): a HesperError becomes a 4xx with its
+ * From failures to answers: a HesperError becomes a 4xx with its
  * code and issues; anything unexpected becomes a generic 500 whose body holds no
  * internals, and is logged with its stack through the app's logger.
  */
@@ -24,7 +24,7 @@ function cut(text: string, max: number): string {
   return text.length <= max ? text : `${text.slice(0, max)}… (${text.length - max} more characters)`;
 }
 
-/** Keeps the issue fields of the contract and drops anything that is not plain data. */
+/** Keeps the documented issue fields and drops anything that is not plain data. */
 function cleanIssue(i: Issue): Issue {
   const out: Issue = { path: cut(String(i.path), 300), message: cut(String(i.message), 1000) };
   const v = i.value;

@@ -54,7 +54,7 @@ function queryParameters(schema: z.ZodObject): Json[] {
 
 const idParameter: Json = { name: 'id', in: 'path', required: true, description: 'Entry id (a slug).', schema: { type: 'string', maxLength: 80 } };
 
-const systemBody = jsonBody(ref('SystemFile'), `A system file (DESIGN section 7). Data only: {responseFile} and {samplesFile} are refused; give curves and samples inline. samples x gridNodes may be at most ${MAX_WORK}.`);
+const systemBody = jsonBody(ref('SystemFile'), `A system file. Data only: {responseFile} and {samplesFile} are refused; give curves and samples inline. samples x gridNodes may be at most ${MAX_WORK}.`);
 
 function paths(): Json {
   return {

@@ -1,5 +1,5 @@
 /**
- * zod schemas of the catalog-entry JSON format (DESIGN.md section 7) and of source
+ * zod schemas of the catalog-entry JSON format and of source
  * records. Used by `catalog add`, the HTTP API, CSV import and the seed loader, so
  * every way into the catalog applies the same rules as the database CHECKs.
  */

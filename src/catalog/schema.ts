@@ -1,5 +1,5 @@
 /**
- * The catalog tables (DESIGN.md section 5) as drizzle-orm sqlite-core definitions.
+ * The catalog tables as drizzle-orm sqlite-core definitions.
  * db/migrations is generated from this file with `npx drizzle-kit generate`;
  * test/catalog/migrations.test.ts fails when the two disagree.
  *

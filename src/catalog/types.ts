@@ -1,4 +1,4 @@
-/** The shapes the catalog hands out (JSON of DESIGN.md section 7, plus origin). */
+/** The shapes the catalog hands out (the catalog-entry JSON, plus origin). */
 import type { Category, Origin, Provenance, Quantity, SourceType } from './vocab.ts';
 
 export interface SpectrumPoint {

@@ -1,5 +1,5 @@
 /**
- * The closed vocabularies of the catalog (DESIGN.md section 5). The database CHECK
+ * The closed vocabularies of the catalog. The database CHECK
  * constraints, the zod schemas and the CLI help are all built from these lists, so a
  * new word is added here once.
  */
@@ -32,9 +32,9 @@ export const QUANTITIES = ['geometric', 'bond', 'spherical', 'surface', 'single-
 export type Quantity = (typeof QUANTITIES)[number];
 
 /**
- * How far a value was checked, mapped from the status words of reference/README.md:
- * verified -> checked, verified (secondary) -> secondary, computed -> computed,
- * from memory -> memory.
+ * How far a value was checked: checked (seen in the primary source), secondary (seen
+ * only restated elsewhere), computed (derived from checked inputs), memory (recalled,
+ * not seen).
  */
 export const PROVENANCES = ['checked', 'secondary', 'computed', 'memory'] as const;
 export type Provenance = (typeof PROVENANCES)[number];

@@ -1,6 +1,6 @@
 /** Where a command writes: injected so tests can run the CLI in-process. */
 export interface CliIo {
-  /** Results only (the contract output). */
+  /** Results only (what a script reads). */
   out(text: string): void;
   /** Progress, warnings and error messages. */
   err(text: string): void;

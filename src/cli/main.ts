@@ -3,7 +3,7 @@ import { HesperError } from '../errors.ts';
 import { type CliIo, processIo } from './io.ts';
 import { buildProgram } from './program.ts';
 
-/** Exit codes of the contract: 0 success, 2 bad input, 1 anything else. */
+/** Exit codes: 0 success, 2 bad input, 1 anything else. */
 export const EXIT_OK = 0;
 export const EXIT_FAILURE = 1;
 export const EXIT_BAD_INPUT = 2;

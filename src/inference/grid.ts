@@ -1,5 +1,5 @@
 /**
- * The albedo grid of DESIGN section 4. For each nuisance draw the geometric albedo is
+ * The albedo grid. For each nuisance draw the geometric albedo is
  * laid on a uniform grid over [0, 1/q] (uniform prior; equivalently A_B = q A_g on
  * [0, 1]), every measured signal is modelled at every node, the likelihoods weight
  * the nodes, and the draw's evidence is the prior-averaged likelihood (trapezoid

@@ -1,5 +1,5 @@
 /**
- * The albedo posterior of a system (DESIGN section 4): nuisance draws, the albedo
+ * The albedo posterior of a system: nuisance draws, the albedo
  * grid per draw, evidence weights, posterior draws and their summaries, the
  * all-reflected albedo, the (eps, q) sensitivity corners, mass effects, warnings.
  * Pure apart from the clock used for diagnostics.computeMs; the random generator
@@ -97,7 +97,7 @@ function quantileGrid(values: Float64Array): Float64Array {
   return grid;
 }
 
-/** The albedo posterior (the JSON contract's fields). */
+/** The albedo posterior (the fields of the interpretation JSON). */
 export function inferAlbedo(s: SystemInput, options: InferOptions = {}): AlbedoPosterior {
   return inferAlbedoDetailed(s, options).posterior;
 }

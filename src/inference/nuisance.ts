@@ -1,5 +1,5 @@
 /**
- * One draw of the nuisance parameters theta (DESIGN section 4): the geometry, the
+ * One draw of the nuisance parameters theta: the geometry, the
  * star, the heat redistribution and phase integral, and the masses when known. The
  * alternative inputs of the system file are resolved here, per draw, so that their
  * uncertainties propagate (e.g. k = Rp / R* from radiusRjup and radiusRsun).

@@ -1,5 +1,5 @@
 /**
- * Seeded random numbers for the Monte Carlo (STYLE.md habit 15: the generator is a
+ * Seeded random numbers for the Monte Carlo (the generator is a
  * parameter, never global). Built on pure-rand's xoroshiro128+; doubles use 53 bits.
  */
 import { uniformFloat64 } from 'pure-rand/distribution/uniformFloat64';

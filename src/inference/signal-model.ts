@@ -1,12 +1,12 @@
 /**
  * The model signals for one nuisance draw as functions of the Bond albedo on the grid
- * (DESIGN sections 3 and 4). Everything that does not depend on the albedo is
+ * Everything that does not depend on the albedo is
  * computed once per draw here; the albedo-dependent part is a few multiplications
  * and two band-flux lookups per grid node.
  *
  * Eclipse depth     = A_g (k/aR)^2 Phi(90deg - i) + k^2 F(T_day) / F(T*)
  * Phase amplitude   = [A_g (k/aR)^2 + k^2 (F(T_day) - F(T_night)) / F(T*)] sin i
- *   (Lambert peak-to-trough is exactly A_g (k/aR)^2 sin i, reference/physics.md;
+ *   (Lambert peak-to-trough is exactly A_g (k/aR)^2 sin i, derived: Phi(90 - i) - Phi(90 + i) = sin i;
  *    two-hemisphere thermal term (F_d - F_n) sin i, common practice)
  * Nightside flux    = A_g (k/aR)^2 Phi(90deg + i) + k^2 F(T_night) / F(T*)
  * T_day, T_night scale as (1 - A_B)^(1/4) at fixed eps (Cowan & Agol 2011, ApJ 729, 54).

@@ -1,4 +1,4 @@
-/** The albedo posterior as reported (DESIGN section 7, "Interpretation"). */
+/** The albedo posterior as reported in the interpretation JSON. */
 import type { Summary } from './summary.ts';
 
 export interface SensitivityRow {
@@ -44,7 +44,7 @@ export interface AlbedoPosterior {
 /**
  * Posterior marginals as sorted quantile grids: values[k] is the k/(n-1) quantile
  * (Hyndman & Fan type 7 over the posterior draws). Handed to the interpretation for
- * probabilities such as P(A_g > x); not part of the JSON contract.
+ * probabilities such as P(A_g > x); not part of the JSON output.
  */
 export interface PosteriorQuantiles {
   geometricAlbedo: Float64Array;

@@ -1,4 +1,4 @@
-/** Warnings users need when reading an albedo posterior (issue on the main job, item 3). */
+/** Warnings users need when reading an albedo posterior (signals the model cannot reach, a dominant thermal share, mass effects, sampling). */
 import type { SystemInput } from '../io/system.ts';
 import { bandRangeNm } from './assumptions.ts';
 import type { GridResult } from './grid.ts';

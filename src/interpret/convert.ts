@@ -1,10 +1,10 @@
 /**
- * A catalog value as a geometric-albedo interval (DESIGN section 6):
+ * A catalog value as a geometric-albedo interval:
  * - geometric: as is;
  * - bond, spherical: divided by the phase integral q over the system's q range
- *   (A_B = q A_g, DESIGN section 3): [min / q_max, max / q_min];
+ *   (A_B = q A_g): [min / q_max, max / q_min];
  * - surface (hemispherical) reflectance r: a Lambert sphere, A_g = 2 r / 3 (Lambert
- *   sphere A_g = 2/3 for r = 1: reference/reflectivity.md row X11, exact);
+ *   sphere A_g = 2/3 for r = 1, exact: integrate the Lambert phase function);
  * - single-scattering albedo w: A_g(w) of a semi-infinite isotropic atmosphere
  *   (Chandrasekhar H-function, src/physics/h-function.ts); A_g rises with w.
  */

@@ -1,6 +1,6 @@
 /**
  * Temperature feasibility of a catalog entry against the planet's T_day and T_eq
- * posteriors (DESIGN section 6).
+ * posteriors.
  *
  * - Entries with a condensing species and a curve (the catalog's, else src/physics):
  *   the cloud can sit in the atmosphere seen in reflection, 1e-3 to 1 bar, where the
@@ -23,7 +23,7 @@ import type { TemperatureCheck } from './types.ts';
 export const P_EXCLUDED = 0.025;
 export const P_MARGINAL = 0.16;
 
-/** Pressures bounding the atmosphere seen in reflection [bar] (DESIGN section 6). */
+/** Pressures bounding the atmosphere seen in reflection [bar] (common practice: the optical photosphere of a giant lies near 1e-3-1 bar). */
 export const TOP_PRESSURE_BAR = 1e-3;
 export const BOTTOM_PRESSURE_BAR = 1;
 

@@ -1,5 +1,5 @@
 /**
- * Matching catalog entries to the albedo posterior (DESIGN section 6). Each entry is
+ * Matching catalog entries to the albedo posterior. Each entry is
  * converted to a geometric-albedo interval in the measured band, compared with the
  * posterior's central intervals, tested for temperature feasibility and band overlap,
  * and given a status with readable reasons:

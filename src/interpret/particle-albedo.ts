@@ -5,7 +5,7 @@
  * percentiles of the required w). Set beside the catalog's particle (Mie)
  * single-scattering albedos: an entry "reaches" the requirement when its largest value
  * is at least the lower 68 % bound.
- * Real cloud grains scatter forward (g = 0.5-0.9 in reference/reflectivity.md table 4a),
+ * Real cloud grains scatter forward (asymmetry parameter g = 0.5-0.9 for micron-sized condensate grains in Mie calculations, e.g. Kitzmann & Heng 2018, MNRAS 475, 94),
  * which lowers A_g at a given w, so the isotropic requirement is a lower bound on w.
  */
 import type { Summary } from '../inference/summary.ts';

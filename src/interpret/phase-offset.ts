@@ -1,9 +1,7 @@
 /**
- * Reading a measured phase-curve offset (positive = eastward, peak before eclipse;
- * DESIGN section 7). East: the thermal hotspot shifted downwind by equatorial winds.
+ * Reading a measured phase-curve offset (positive = eastward, peak before eclipse). East: the thermal hotspot shifted downwind by equatorial winds.
  * West (peak after eclipse) in an optical band: reflective clouds on the cooler
- * western dayside (Demory et al. 2013, ApJ 776, L25; Parmentier et al. 2016, ApJ 828, 22:
- * reference/reflectivity.md rows X14 and X22, checked). The size of the offset is set
+ * western dayside (Demory et al. 2013, ApJ 776, L25; Parmentier et al. 2016, ApJ 828, 22). The size of the offset is set
  * against its error: >= 3 sigma significant, 2-3 sigma tentative (common practice).
  */
 import type { Dist } from '../io/distribution.ts';

@@ -1,6 +1,6 @@
 /**
  * The main job as one call: a parsed system and the catalog data in, the
- * interpretation out (DESIGN sections 2 and 6). The CLI, the API, batch runs and the
+ * interpretation out. The CLI, the API, batch runs and the
  * tests all come through here. Pure: the catalog is passed in, never opened here.
  */
 import type { SystemInput } from '../io/system.ts';
@@ -89,7 +89,7 @@ export function interpretSystemDetailed(system: SystemInput, options: InterpretO
   return interpretPosterior(system, posterior, quantiles, catalog);
 }
 
-/** The interpretation of DESIGN section 7 (the JSON of `interpret --json` and the API). */
+/** The interpretation (the JSON of `interpret --json` and the API). */
 export function interpretSystem(system: SystemInput, options: InterpretOptions = {}): Interpretation {
   return interpretSystemDetailed(system, options).interpretation;
 }

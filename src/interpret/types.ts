@@ -1,5 +1,5 @@
 /**
- * What the interpretation adds to the albedo posterior (DESIGN sections 6 and 7):
+ * What the interpretation adds to the albedo posterior:
  * the catalog match, the clouds-or-ice verdict, the particle albedo a thick cloud
  * would need, and the reading of a measured phase offset.
  */

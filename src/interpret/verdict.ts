@@ -1,5 +1,5 @@
 /**
- * "Clouds or ice required?" (DESIGN section 6). The cloud-free ceiling is the highest
+ * "Clouds or ice required?" The cloud-free ceiling is the highest
  * geometric albedo (upper end of the converted interval) among the cloud-free
  * references that are feasible for this planet: clear atmospheres for giants, bare
  * rock and lava for rocky planets, both inside the radius valley. Feasible means that

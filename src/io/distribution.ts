@@ -1,6 +1,6 @@
 /**
  * Canonical distributions: a parsed quantity converted once, at the edge, into the
- * canonical unit of its field (STYLE.md habit 5) and checked against the field's
+ * canonical unit of its field and checked against the field's
  * physical range. The inference draws from these; it never sees units.
  */
 import { type Issue, type RangeBounds } from '../errors.ts';

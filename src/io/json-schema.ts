@@ -12,7 +12,7 @@ export function systemJsonSchema(): Record<string, unknown> {
   return {
     ...schema,
     title: 'hesper system file',
-    description: 'A planet, its star, measured optical signals and the assumptions of the interpretation (DESIGN section 7).',
+    description: 'A planet, its star, measured optical signals and the assumptions of the interpretation.',
   };
 }
 

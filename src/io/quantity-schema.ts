@@ -1,5 +1,5 @@
 /**
- * The quantity forms of the system file (DESIGN section 7): a number, value+sigma,
+ * The quantity forms of the system file: a number, value+sigma,
  * value+plus+minus, min+max (uniform), upperLimit+confidence (measurements only),
  * samplesFile+column (CLI only) or inline samples (API). Any may add "unit".
  * NaN and Infinity cannot pass: z.number() rejects them.

@@ -1,5 +1,5 @@
 /**
- * zod schema of the system file (DESIGN section 7). The JSON Schema shipped for
+ * zod schema of the system file. The JSON Schema shipped for
  * editors (src/io/system-file.schema.json) is generated from this schema.
  */
 import { z } from 'zod';

@@ -1,7 +1,7 @@
 /**
  * The system file, parsed and converted to canonical units (SystemInput). Shape
  * errors come from zod, range errors from the field specs, and the alternatives of
- * DESIGN section 7 (semiMajorAxisAu or periodDays instead of scaledSemiMajorAxis,
+ * the system file (semiMajorAxisAu or periodDays instead of scaledSemiMajorAxis,
  * radiusRjup or radiusRearth instead of radiusRatio) are checked for completeness.
  * All problems are collected and reported together.
  */

@@ -16,8 +16,7 @@
  *   with offset, max - min of P on a grid, whose gradient is the difference of the
  *   columns at the two extremes (envelope theorem).
  * - phaseOffsetDeg: delta = atan2(b1, a1), the phase of the first harmonic: the peak
- *   comes at phi = 0.5 - delta / 360 deg, positive = eastward, before eclipse (DESIGN
- *   section 7). Exact peak shift for the cosine term; for the Lambert term the shift of
+ *   comes at phi = 0.5 - delta / 360 deg, positive = eastward, before eclipse. Exact peak shift for the cosine term; for the Lambert term the shift of
  *   its first harmonic.
  * - nightsideFluxPpm: P at transit relative to the eclipse depth, D - Ap (L(0.5) - L(0) = 1,
  *   and the sine vanishes at 0 and 0.5).

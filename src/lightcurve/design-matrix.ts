@@ -13,7 +13,7 @@
  *   eclipse      -h(phi)                D: eclipse depth; h is the hidden fraction of the
  *                                          planet (two-disk overlap or a box)
  *
- * Signs (the usual ones; from memory, as noted in shared/reference/physics.md): beaming
+ * Signs (the usual ones; from memory): beaming
  * brightens the star at phi = 0.25, when the star approaches us (derived: after transit
  * the planet recedes, so the star comes towards us); ellipsoidal light is faintest at
  * the conjunctions, when we see the tidal bulge end-on. D is the planet flux at full phase; during the eclipse the model keeps

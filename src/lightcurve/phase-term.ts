@@ -5,8 +5,7 @@
  *
  * - cosine: L = -cos(2 pi phi) / 2 (a first harmonic; common practice).
  * - lambert: L = Phi(alpha(phi)) / [Phi(90 deg - i) - Phi(90 deg + i)], with the Lambert
- *   phase function Phi and cos alpha = -sin i cos(2 pi phi) from src/physics/reflection.ts
- *   (DESIGN section 3).
+ *   phase function Phi and cos alpha = -sin i cos(2 pi phi) from src/physics/reflection.ts.
  *
  * For the offset and the brightness map the first-harmonic content of L is needed:
  * L(phi) = mean - h1 cos(2 pi phi) + (higher even terms), h1 = -2 integral_0^1 L cos(2 pi phi) dphi.

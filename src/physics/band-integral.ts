@@ -5,8 +5,7 @@
  *   energy weighting: F = integral B_lambda(T) R(lambda) dlambda                     [W m^-2 sr^-1]
  *
  * (Photon-counting band flux: STScI Synphot User's Guide ch. 6; Bessell & Murphy 2012,
- * PASP 124, 140. DESIGN section 3 writes the photon integral without the constant 1/hc,
- * which cancels in every ratio.) Both are computed in the variable x = hc / (lambda k T):
+ * PASP 124, 140. The constant 1/hc cancels in every ratio.) Both are computed in the variable x = hc / (lambda k T):
  *
  *   photon: F = 2 c T^3 / c2^3 * integral x^2 / (e^x - 1) R dx
  *   energy: F = 2 h c^2 T^4 / c2^4 * integral x^3 / (e^x - 1) R dx      (derived, c2 = hc/k)

@@ -1,7 +1,7 @@
 /**
  * Built-in bands. None is a tabulated instrument response: each is a top-hat or a
  * trapezoid built from published coverage only, so every one is `approximate: true`
- * (shared/reference/physics.md, "Bands"; status tags carried from there). For precise
+ * (the source and how far it was checked are given per band). For precise
  * work users give the tabulated response as a CSV file or an inline array.
  */
 

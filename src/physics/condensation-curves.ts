@@ -1,11 +1,9 @@
 /**
  * Condensation-curve fits of cloud species,
  *   10^4 / T_cond = a - b log10(P/bar) + quadratic (log10(P/bar))^2 - c [M/H]
- * (shared/reference/physics.md, "Condensation curves"). All coefficients are tagged
- * memory there, with the corroboration noted in `note`. The sign convention is fixed
+ * All coefficients are from memory (sources named per species), with the corroboration noted in `note`. The sign convention is fixed
  * numerically by the check values: Fe gives 1453 K at 1e-3 bar (= Lodders & Fegley 1993)
- * and Cr 1521 K at 1 bar only with the minus signs. DESIGN section 3 writes the same law
- * with "+ b log P + c [M/H]"; read its b, c as the negatives of these.
+ * and Cr 1521 K at 1 bar only with the minus signs (Visscher et al. 2010 write the law with these signs).
  */
 import type { Provenance } from './bands-builtin.ts';
 
@@ -23,7 +21,7 @@ export interface CondensationCurve {
   readonly metallicityRangeDex: readonly [number, number];
 }
 
-/** "Valid roughly 1e-4 to 1e2 bar, [M/H] within +-1 dex: warn outside" (reference/physics.md). */
+/** "Valid roughly 1e-4 to 1e2 bar, [M/H] within +-1 dex: warn outside" (from memory). */
 export const FIT_PRESSURE_RANGE_BAR: readonly [number, number] = [1e-4, 1e2];
 export const FIT_METALLICITY_RANGE_DEX: readonly [number, number] = [-1, 1];
 

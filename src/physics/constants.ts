@@ -1,7 +1,7 @@
 /**
  * Physical and astronomical constants, SI. Each base constant is a record with its
  * value, unit and reference; derived constants are computed from base ones, never
- * retyped (STYLE.md habit 6). Status tags follow shared/reference/physics.md.
+ * retyped. Status tags: checked (seen in the source), secondary, derived, memory.
  */
 
 export interface Constant {

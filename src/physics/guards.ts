@@ -1,6 +1,6 @@
 /**
  * Argument guards shared by the physics functions: each throws a HesperError with the
- * argument name, the value and the allowed range (STYLE.md habit 9).
+ * argument name, the value and the allowed range.
  */
 import { requireInRange } from '../errors.ts';
 

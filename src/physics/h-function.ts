@@ -22,7 +22,7 @@
  * of the same size gives pi R^2 F, so
  *   A_g(w) = 2 int_0^1 I(mu; mu)/F mu dmu = (w / 4) int_0^1 H(mu)^2 mu dmu.
  * Check values: A_g = 0.69, 0.53, 0.31, 0.09 at w = 1, 0.99, 0.90, 0.5
- * (shared/reference/reflectivity.md row X10, computed with H-functions).
+ * (computed with H-functions; Chandrasekhar 1960, Radiative Transfer, Dover).
  */
 import { HesperError, requireInRange } from '../errors.ts';
 import { gaussLegendreRule } from './integrate.ts';

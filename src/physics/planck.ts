@@ -1,6 +1,6 @@
 /**
  * Blackbody radiation, SI. B_lambda(T) = 2 h c^2 lambda^-5 / (exp(hc / (lambda k T)) - 1)
- * (Planck 1901; DESIGN section 3). Band integrals over response curves live in
+ * (Planck 1901). Band integrals over response curves live in
  * band-integral.ts; this file holds the monochromatic functions.
  */
 import { inputError, requireInRange, requirePositive } from '../errors.ts';

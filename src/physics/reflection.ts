@@ -1,11 +1,11 @@
 /**
- * Reflected light. Symbols as in DESIGN section 3: k = Rp/R*, aR = a/R*, A_g geometric
+ * Reflected light. Symbols: k = Rp/R*, aR = a/R*, A_g geometric
  * albedo, alpha phase angle (0 at full phase), phi orbital phase (0 at transit).
  *
  * - Full-phase flux ratio F_r/F* = A_g (k/aR)^2 (Seager 2010, Exoplanet Atmospheres,
  *   Princeton UP; Winn 2010, arXiv:1001.2010; memory for the page).
  * - Lambert phase function Phi(alpha) = [sin alpha + (pi - alpha) cos alpha] / pi
- *   (checked, reference/physics.md).
+ *   (Russell 1916, ApJ 43, 173; the standard form, e.g. Seager 2010).
  * - cos alpha = -sin i cos(2 pi phi) (derived).
  * - Phase integral q = 2 * integral_0^pi Phi(alpha) sin alpha dalpha; A_B = q A_g.
  */

@@ -1,5 +1,5 @@
 /**
- * Volatile condensates without a fit of the 10^4/T form (reference/physics.md): the
+ * Volatile condensates without a fit of the 10^4/T form: the
  * cloud base is where the saturation vapour pressure equals the partial pressure,
  * p_sat(T) = x P, with x the volume mixing ratio of the species (scaled by 10^[M/H]).
  */
@@ -47,13 +47,13 @@ function waterSaturationBar(temperatureK: number): number {
   return hPa / HPA_PER_BAR;
 }
 
-/** Ammonia: ln p[bar] = 10.53 - 2161/T - 86596/T^2 (reference/physics.md; secondary). */
+/** Ammonia: ln p[bar] = 10.53 - 2161/T - 86596/T^2 (secondary: quoted without its primary source; from memory). */
 function ammoniaSaturationBar(temperatureK: number): number {
   return Math.exp(10.53 - 2161 / temperatureK - 86596 / temperatureK ** 2);
 }
 
-// Methane: Clausius-Clapeyron through the triple point (90.68 K, 0.11719 bar; reference/physics.md,
-// secondary) and the normal boiling point (111.67 K at 1.01325 bar; memory). L/R from the two (derived).
+// Methane: Clausius-Clapeyron through the triple point (90.68 K, 0.11719 bar; secondary,
+// from memory) and the normal boiling point (111.67 K at 1.01325 bar; memory). L/R from the two (derived).
 const CH4_TRIPLE_K = 90.68;
 const CH4_TRIPLE_BAR = 0.11719;
 const CH4_BOILING_K = 111.67;
@@ -83,7 +83,7 @@ export const SATURATION_CURVES: Readonly<Record<string, SaturationCurve>> = Obje
     searchRangeK: [40, 405] as const,
     temperatureRangeK: [150, 300] as const, // memory
     solarMixingRatio: solarX(7.83),
-    source: 'vapour-pressure fit ln p = 10.53 - 2161/T - 86596/T^2 (reference/physics.md); solar N from Asplund et al. 2009',
+    source: 'vapour-pressure fit ln p = 10.53 - 2161/T - 86596/T^2 (secondary, from memory); solar N from Asplund et al. 2009',
     status: 'secondary' as const,
     note: 'x assumes all N in NH3',
   }),

@@ -1,6 +1,6 @@
 /**
  * Thermal emission of the planet in a band, blackbody planet and star:
- *   delta_th = k^2 F_band(T_day) / F_band(T*)        (derived, reference/physics.md)
+ *   delta_th = k^2 F_band(T_day) / F_band(T*)        (derived)
  * Phase variation, two-hemisphere approximation (common practice):
  *   F_th(alpha) = F_n + (F_d - F_n)(1 + cos alpha)/2, peak-to-trough (F_d - F_n) sin i.
  * All results are fractions of the stellar flux (multiply by 1e6 for ppm).

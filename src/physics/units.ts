@@ -1,5 +1,5 @@
 /**
- * Units for user input (the edge of the program, STYLE.md habit 5). mathjs parses
+ * Units for user input (the edge of the program). mathjs parses
  * strings such as "0.045 au" or "1.2 Rjup"; the astronomical units are defined here
  * from constants.ts so that there is one table of values. Physics functions never
  * parse strings: callers convert once with toSi / convertValue.

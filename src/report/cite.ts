@@ -40,7 +40,7 @@ export interface MethodPaper {
   text: string;
 }
 
-/** The method papers of the interpretation (bibliographic details as in DESIGN.md and reference/reflectivity.md). */
+/** The method papers of the interpretation (bibliographic details in seeds/sources.json). */
 export const METHOD_PAPERS = {
   cowanAgol: { firstAuthor: 'Cowan', year: 2011, text: 'Cowan & Agol 2011, ApJ 729, 54' },
   fulton: { firstAuthor: 'Fulton', year: 2017, text: 'Fulton et al. 2017, AJ 154, 109' },

@@ -1,5 +1,5 @@
 // Calls to the hesper HTTP API. Every answer is { ok, status, body }; error bodies
-// have the contract shape { error: { code, message, issues: [{ path, message }] } }.
+// have the shape { error: { code, message, issues: [{ path, message }] } }.
 
 async function call(method, url, body, bodyIsText = false) {
   const init = { method, headers: { accept: 'application/json' } };

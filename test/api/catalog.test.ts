@@ -92,7 +92,7 @@ describe('user entries through the API', () => {
     const after = await (await postJson(api.app, '/api/interpret', system)).json();
     const candidate = after.candidates.find((c: { id: string }) => c.id === 'api-test-dark-soot');
     expect(candidate).toBeDefined();
-    // derived: a geometric-albedo entry is used as is (DESIGN section 6), so its interval is the entry's own.
+    // derived: a geometric-albedo entry is used as is, so its interval is the entry's own.
     expect(candidate.geometricAlbedoRange).toEqual([0.02, 0.06]);
     await api.app.request('/api/catalog/entries/api-test-dark-soot', { method: 'DELETE' });
   });

@@ -47,7 +47,7 @@ export function quickSystem(name = 'aurelia-b', samples = 600): Record<string, a
   return { ...s, assumptions: { ...(s.assumptions ?? {}), samples, gridNodes: 128 } };
 }
 
-/** The error body of the contract, asserted and returned. */
+/** The documented error body, asserted and returned. */
 export async function errorOf(res: Response): Promise<{ code: string; message: string; issues: Array<{ path: string; message: string }> }> {
   const body = (await res.json()) as { error: { code: string; message: string; issues: Array<{ path: string; message: string }> } };
   return body.error;

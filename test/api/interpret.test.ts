@@ -23,7 +23,7 @@ function withoutClock<T extends { diagnostics: { computeMs: number } }>(r: T): T
 }
 
 describe('POST /api/interpret', () => {
-  it('answers the contract JSON, equal to the library result for the same system', async () => {
+  it('answers the interpretation JSON, equal to the library result for the same system', async () => {
     const system = quickSystem('corvina-b');
     const res = await postJson(api.app, '/api/interpret', system);
     expect(res.status).toBe(200);

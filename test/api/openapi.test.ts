@@ -34,7 +34,7 @@ describe('the OpenAPI document', () => {
       Object.entries(doc.paths).flatMap(([p, ops]) => Object.keys(ops as object).filter((m) => m !== 'parameters').map((m) => `${m} ${p}`)),
     );
     expect([...documented].sort()).toEqual([...served].sort());
-    // The routes of DESIGN section 7 (plus the demo routes of the page).
+    // The documented routes (plus the demo routes of the page).
     for (const r of ['get /api/health', 'post /api/interpret', 'post /api/report', 'get /api/bands', 'get /api/catalog/entries', 'post /api/catalog/entries',
       'get /api/catalog/entries/{id}', 'patch /api/catalog/entries/{id}', 'delete /api/catalog/entries/{id}', 'get /api/catalog/sources',
       'get /api/catalog/bibtex', 'get /api/openapi.json']) {

@@ -57,7 +57,7 @@ describe('curated seed content', () => {
         expect(e.description, `${id} names ${table}`).toContain(table);
       }
     }
-    // reference/README.md: grass ranges from 0.10 to 0.25 between compilations; record the range.
+    // The compilations disagree on grass (0.10 to 0.25, common practice): the range is recorded.
     expect(byId('grass-typical-common-practice')).toMatchObject({ valueMin: 0.1, valueMax: 0.25 });
   });
 });
@@ -84,7 +84,7 @@ describe('spot checks of seeded values against their sources', () => {
 
   it('Enceladus 1.38-1.41 at opposition (Verbiscer et al. 2005, Icarus 173, 66; 2007, Science 315, 815)', () => {
     expect(byId('enceladus-geometric-555-verbiscer2005')).toMatchObject({ valueNominal: 1.41, provenance: 'secondary' });
-    // 1.375 is recorded in reflectivity.md S28 as "from memory": the seed says so.
+    // 1.375 was recalled, not seen in the paper: the seed says so (provenance memory).
     expect(byId('enceladus-geometric-v-verbiscer2007')).toMatchObject({ valueNominal: 1.375, provenance: 'memory' });
   });
 
@@ -119,13 +119,13 @@ describe('spot checks of seeded values against their sources', () => {
     expect(byId('rayleigh-w090-semi-infinite').valueNominal).toBe(0.398);
   });
 
-  it('isotropic scatterers A_g 0.69 / 0.53 / 0.31 at w = 1 / 0.99 / 0.90 (computed, reference/reflectivity.md X10)', () => {
+  it('isotropic scatterers A_g 0.69 / 0.53 / 0.31 at w = 1 / 0.99 / 0.90 (computed with the Chandrasekhar 1960 H-function)', () => {
     expect(byId('isotropic-w100-semi-infinite')).toMatchObject({ valueNominal: 0.69, provenance: 'computed' });
     expect(byId('isotropic-w099-semi-infinite').valueNominal).toBe(0.53);
     expect(byId('isotropic-w090-semi-infinite').valueNominal).toBe(0.31);
   });
 
-  it('Mie w0 of MgSiO3 glass 0.9999 / 0.9997 at 550 / 800 nm for r_eff 0.1 um (computed, reflectivity.md C1)', () => {
+  it('Mie w0 of MgSiO3 glass 0.9999 / 0.9997 at 550 / 800 nm for r_eff 0.1 um (computed: Mie theory, Bohren & Huffman 1983, with optical constants of Dorschner et al. 1995)', () => {
     const e = byId('mie-mgsio3-glass-r0p1um');
     expect(e).toMatchObject({ quantity: 'single-scattering', condensate: 'MgSiO3', provenance: 'computed', category: 'cloud' });
     expect(e.spectrum).toEqual([{ wavelengthNm: 550, value: 0.9999 }, { wavelengthNm: 800, value: 0.9997 }]);
@@ -133,7 +133,7 @@ describe('spot checks of seeded values against their sources', () => {
   });
 });
 
-describe('condensation curves (reference/physics.md table, coefficients from memory)', () => {
+describe('condensation curves (coefficients from memory, sources per species)', () => {
   const expected: [string, number, number, number, number, string][] = [
     ['Fe', 5.44, 0.48, 0.48, 0, 'Visscher2010'],
     ['Mg2SiO4', 5.89, 0.37, 0.73, 0, 'Visscher2010'],
@@ -157,19 +157,19 @@ describe('condensation curves (reference/physics.md table, coefficients from mem
     expect(curves.find((x) => x.species === 'MgSiO3')!.note).toContain('uncertain');
   });
 
-  it('reproduce the temperatures physics.md derives from them', () => {
+  it('reproduce the temperatures derived from the fits', () => {
     const tCond = (species: string, pBar: number, mh = 0) => {
       const k = catalog.listCondensates().find((x) => x.species === species)!;
       const lp = Math.log10(pBar);
       return 1e4 / (k.a - k.b * lp - k.c * mh + k.d * lp * lp);
     };
-    // derived in reference/physics.md: solar metallicity, 1 bar
+    // derived from the fits: solar metallicity, 1 bar
     expect(tCond('Cr', 1)).toBeCloseTo(1521, 0);
     expect(tCond('MnS', 1)).toBeCloseTo(1342, 0);
     expect(tCond('Na2S', 1)).toBeCloseTo(995, 0);
     expect(tCond('ZnS', 1)).toBeCloseTo(799, 0);
     expect(tCond('KCl', 1)).toBeCloseTo(801, 0);
-    // physics.md notes at 1e-3 bar (compared there with Lodders & Fegley 1993)
+    // at 1e-3 bar (Fe 1453 K as in Lodders & Fegley 1993, Icarus 115, 95; the others derived)
     expect(Math.round(tCond('Fe', 1e-3))).toBe(1453);
     expect(Math.round(tCond('Al2O3', 1e-3))).toBe(1758);
     expect(Math.round(tCond('CaTiO3', 1e-3))).toBe(1679);

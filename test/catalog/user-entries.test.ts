@@ -104,7 +104,7 @@ describe('user entries', () => {
     expect(err.issues[0]!.allowed).toContain('clear-atmosphere');
   });
 
-  it('exposes the entry JSON schema for the API (DESIGN.md section 7 example validates)', () => {
+  it('exposes the entry JSON schema for the API (the documented example entry validates)', () => {
     const example = {
       id: 'fresh-snow', name: 'Fresh snow', category: 'ice', quantity: 'surface', bandMinNm: 300, bandMaxNm: 3000, valueMin: 0.7, valueMax: 0.9,
       valueNominal: 0.8, temperatureMinK: null, temperatureMaxK: 273, description: '...', provenance: 'checked',

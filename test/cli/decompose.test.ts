@@ -35,7 +35,7 @@ describe('hesper decompose on the invented demo curve', () => {
     }
   });
 
-  it('--json gives the DESIGN section 7 fields and recovers the injected signals within 3 sigma', async () => {
+  it('--json gives the documented decomposition fields and recovers the injected signals within 3 sigma', async () => {
     const r = await run(['decompose', DEMO, ...GEOMETRY, '--offset', '--predicted-beaming', '3.6,0.5', '--json']);
     expect(r.code).toBe(0);
     const j = JSON.parse(r.out);

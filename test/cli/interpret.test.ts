@@ -25,7 +25,7 @@ async function expectBadInput(json: unknown | string, field: RegExp, extra: Reco
 }
 
 describe('hesper interpret', () => {
-  it('prints the contract JSON with every field of DESIGN section 7', async () => {
+  it('prints the interpretation JSON with every documented field', async () => {
     const run = await runCli(['interpret', 'systems/corvina-b.json', '--json', '--samples', '1000', '--seed', '3'], { cwd: demoDir });
     expect(run.code).toBe(0);
     const j = JSON.parse(run.stdout);

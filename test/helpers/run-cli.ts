@@ -1,4 +1,4 @@
-/** Runs the CLI in-process with captured output (STYLE.md habit 17). */
+/** Runs the CLI in-process with captured output. */
 import { mkdtempSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';

@@ -7,7 +7,7 @@ import { entry } from './helpers.ts';
 
 const qDefault = { kind: 'uniform', min: 1, max: 1.5 } as const;
 
-describe('catalog values as geometric albedos (DESIGN section 6)', () => {
+describe('catalog values as geometric albedos', () => {
   it('keeps geometric albedos as they are', () => {
     const c = toGeometricAlbedo(entry({ id: 'g', quantity: 'geometric', valueMin: 0.3, valueNominal: 0.35, valueMax: 0.4 }), qDefault);
     expect(c.range).toEqual([0.3, 0.4]);
@@ -22,7 +22,7 @@ describe('catalog values as geometric albedos (DESIGN section 6)', () => {
     expect(bond.nominal).toBeCloseTo(0.45 / 1.25, 12);
     expect(bond.conversion).toMatch(/q = 1-1\.5/);
     const fixedQ = toGeometricAlbedo(entry({ id: 's', quantity: 'spherical', valueMin: 0.9, valueNominal: 0.9, valueMax: 0.9 }), { kind: 'fixed', value: 1.35 });
-    // Venus: spherical albedo 0.90 with q = 1.35 gives A_g = 0.667 (Mallama et al. 2006 quote 0.67: reference/reflectivity.md S3).
+    // Venus: spherical albedo 0.90 with q = 1.35 gives A_g = 0.667 (Mallama et al. 2006, Icarus 182, 10, quote 0.67).
     expect(Math.abs(fixedQ.nominal - 0.67)).toBeLessThan(0.005);
   });
 
@@ -35,14 +35,14 @@ describe('catalog values as geometric albedos (DESIGN section 6)', () => {
   });
 
   it('treats a surface reflectance as a Lambert sphere, A_g = 2r/3', () => {
-    // reference/reflectivity.md "How to read": a Lambert-like surface of albedo a has A_g = 2a/3.
+    // A Lambert surface of albedo a has A_g = 2a/3 (derived from the Lambert phase function; common practice).
     const c = toGeometricAlbedo(entry({ id: 'r', quantity: 'surface', valueMin: 0.6, valueNominal: 0.75, valueMax: 0.9 }), qDefault);
     expect(c.range[0]).toBeCloseTo(0.4, 12);
     expect(c.range[1]).toBeCloseTo(0.6, 12);
   });
 
   it('maps a single-scattering albedo through A_g(w) of the H-function', () => {
-    // reference/reflectivity.md X10: A_g = 0.69 at w = 1 and 0.31 at w = 0.90 (two decimals).
+    // Semi-infinite isotropic scattering (Chandrasekhar 1960 H-function, computed): A_g = 0.69 at w = 1 and 0.31 at w = 0.90 (two decimals).
     const c = toGeometricAlbedo(entry({ id: 'w', quantity: 'single-scattering', valueMin: 0.9, valueNominal: 0.95, valueMax: 1 }), qDefault);
     expect(Math.abs(c.range[0] - 0.31)).toBeLessThan(0.005);
     expect(Math.abs(c.range[1] - 0.69)).toBeLessThan(0.005);

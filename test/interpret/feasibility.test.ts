@@ -10,7 +10,7 @@ const iceSurface = entry({ id: 'ice-surface', category: 'ice', quantity: 'surfac
 
 describe('temperature feasibility from condensation curves', () => {
   it('takes the window of a cloud from its curve between 1e-3 and 1 bar', () => {
-    // derived from the curve of src/physics (Visscher et al. 2010 form, reference/physics.md):
+    // derived from the curve of src/physics (Visscher et al. 2010 form, coefficients from memory):
     // the feasible layer is bounded by T_cond(1e-3 bar) and T_cond(1 bar) at the given metallicity.
     const range = condensationRangeK('MgSiO3', { curves: curveMap([]), metallicityDex: 0 })!;
     expect(range[0]).toBe(condensationTemperatureK('MgSiO3', 1e-3, 0));
@@ -19,7 +19,7 @@ describe('temperature feasibility from condensation curves', () => {
 
   it('MgSiO3 clouds are feasible at 1400 K and excluded at 2600 K', () => {
     // Issue 5: from the curve, not from a list. T_cond(MgSiO3, 1 bar, solar) = 1e4 / 6.26 = 1597 K
-    // (derived from a = 6.26 of reference/physics.md), T_cond(1e-3 bar) = 1e4 / (6.26 + 3 * 0.35) = 1368 K.
+    // (derived from a = 6.26, Visscher et al. 2010, from memory), T_cond(1e-3 bar) = 1e4 / (6.26 + 3 * 0.35) = 1368 K.
     const at1400 = checkTemperature(mgsio3Cloud, temperatures([1380, 1420]));
     expect(at1400.kind).toBe('condensation');
     expect(at1400.grade).toBe('ok');

@@ -9,7 +9,7 @@ import type { CatalogData } from '../../src/interpret/types.ts';
 import type { Summary } from '../../src/inference/summary.ts';
 import { cleanupTemp, tempDbPath } from '../catalog/helpers.ts';
 
-/** An invented catalog entry (test data only); fields as DESIGN section 7. */
+/** An invented catalog entry (test data only); fields as the catalog-entry JSON. */
 export function entry(over: Partial<CatalogEntry> & { id: string }): CatalogEntry {
   return {
     name: `Invented entry ${over.id}`,

@@ -10,14 +10,14 @@ function context(over: Partial<MatchContext> = {}): MatchContext {
 }
 
 describe('matching catalog entries to the posterior', () => {
-  it('excludes an entry darker than the 95 % interval, with the reason of issue 5', () => {
+  it('excludes an entry darker than the 95 % interval, with a readable reason', () => {
     const m = matchEntry(entry({ id: 'dark', valueMin: 0.01, valueNominal: 0.03, valueMax: 0.05, bandMinNm: 600, bandMaxNm: 1000 }), context());
     expect(m.candidate.status).toBe('excluded');
     expect(m.candidate.reasons[0]).toBe('too dark: 0.01-0.05 lies below the 95 % interval 0.21-0.45');
     expect(m.candidate.probability).toBe(0);
   });
 
-  it('marks a band that misses the measured band, with the reason of issue 5', () => {
+  it('marks a band that misses the measured band, with a readable reason', () => {
     const m = matchEntry(entry({ id: 'v-band', valueMin: 0.3, valueNominal: 0.33, valueMax: 0.36, bandMinNm: 507, bandMaxNm: 595 }), context());
     expect(m.candidate.status).toBe('marginal');
     expect(m.candidate.reasons).toContain('band: value is for Johnson V (507-595 nm), measurement is TESS 600-1000 nm');

@@ -1,6 +1,6 @@
 /**
  * Property tests of the system-file reader: malformed and extreme bodies always give
- * a HesperError whose issues name a path, never another exception (issue on reliability).
+ * a HesperError whose issues name a path, never another exception.
  */
 import { readFileSync } from 'node:fs';
 import fc from 'fast-check';

@@ -49,7 +49,7 @@ describe('system file: quantity forms and units', () => {
     expect(s.notes.join(' ')).toMatch(/doubled/);
   });
 
-  it('applies the default assumptions of DESIGN section 7', () => {
+  it('applies the documented default assumptions', () => {
     const s = parseSystem(demo('aurelia-b.json'));
     expect(s.assumptions.redistribution).toEqual({ kind: 'uniform', min: 0, max: 1 });
     expect(s.assumptions.phaseIntegral).toEqual({ kind: 'uniform', min: 1, max: 1.5 });

@@ -107,7 +107,7 @@ describe('decompose: recovery of known signals', () => {
     const s = spec({ planetFlux, seed: 4 });
     const r = decompose(syntheticTimeSeries(s), options(s, { phaseModel: 'lambert' }));
     // derived: peak-to-trough 70 ppm; D = Fp(0.5) = 5 + 70 Phi(3 deg)/sin(87 deg) ppm
-    // (range = Phi(90 - i) - Phi(90 + i), = sin i per shared/reference/physics.md).
+    // (range = Phi(90 - i) - Phi(90 + i), = sin i, derived from the Lambert phase function).
     within3Sigma(r.phaseAmplitudePpm, 70);
     within3Sigma(r.eclipseDepthPpm, planetFlux(0.5) / PPM);
     within3Sigma(r.nightsideFluxPpm, 5);

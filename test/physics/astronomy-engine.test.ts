@@ -37,7 +37,7 @@ describe('astronomy-engine cross-check', () => {
     const ag = geometricAlbedoFromFluxRatio(fluxRatio / lambertPhaseFunction(alpha), k, aR);
     // NASA Jupiter fact sheet: visual geometric albedo 0.538 (current edition; older editions print 0.52).
     // Tolerance 3 % (justified): the library's Sun magnitude at 1 au is -26.74, uncertain by 0.02 mag
-    // (Mamajek, reference/physics.md: 1.8 %); its Jupiter V(1,0) = -9.40 is printed to 0.01 mag (0.9 %);
+    // (Mamajek et al. 2015, arXiv:1510.07674: 1.8 %); its Jupiter V(1,0) = -9.40 is printed to 0.01 mag (0.9 %);
     // the disc-radius convention at a sub-Earth latitude of ~3 deg adds < 0.2 % (derived). Sum ~2.9 %.
     expect(Math.abs(ag / 0.538 - 1)).toBeLessThan(0.03);
   });

@@ -19,7 +19,7 @@ describe('built-in bands', () => {
     }
   });
 
-  it('uses the coverage of reference/physics.md', () => {
+  it('uses the published coverage of each band', () => {
     const k = resolveBand('kepler');
     // Kepler Instrument Handbook (Van Cleve & Caldwell 2016): half maximum 430-840 nm (checked), total ~420-900 nm (memory).
     expect(k.halfMaxNm).toEqual([430, 840]);

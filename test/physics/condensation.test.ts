@@ -5,34 +5,34 @@ import {
 } from '../../src/physics/condensation.ts';
 
 describe('condensation fits', () => {
-  it('covers the ten species of reference/physics.md plus H2O, NH3 and CH4', () => {
+  it('covers the ten fitted species plus H2O, NH3 and CH4', () => {
     expect(Object.keys(CONDENSATION_CURVES).sort()).toEqual(
       ['Al2O3', 'CaTiO3', 'Cr', 'Fe', 'KCl', 'Mg2SiO4', 'MgSiO3', 'MnS', 'Na2S', 'ZnS'].sort(),
     );
     expect(condensationSpecies()).toEqual(expect.arrayContaining(['H2O', 'NH3', 'CH4']));
     for (const c of Object.values(CONDENSATION_CURVES)) {
       expect(c.source).toMatch(/\d{4}/);
-      expect(c.status).toBe('memory'); // reference/physics.md tags every coefficient memory
+      expect(c.status).toBe('memory'); // every coefficient is from memory
     }
     expect(CONDENSATION_CURVES.MgSiO3?.note).toMatch(/uncertain/);
   });
 
   it('gives Fe 1453 K at 1e-3 bar (Lodders & Fegley 1993), fixing the minus-sign convention', () => {
-    // Lodders & Fegley 1993 via reference/physics.md: 1453 K; 10^4/T = 5.44 + 0.48*3 = 6.88 (derived), within 1 K.
+    // Lodders & Fegley 1993 (Icarus 115, 95; from memory): 1453 K; 10^4/T = 5.44 + 0.48*3 = 6.88 (derived), within 1 K.
     expect(Math.abs(condensationTemperatureK('Fe', 1e-3) - 1453)).toBeLessThan(1);
     // With "+ b log P" the same coefficients would give 10^4/3.96 = 2525 K: the check rules that reading out.
     const fe = CONDENSATION_CURVES.Fe!;
     expect(Math.abs(1e4 / (fe.a + fe.b * Math.log10(1e-3)) - 1453)).toBeGreaterThan(500);
   });
 
-  it('reproduces the other species within the differences noted in reference/physics.md', () => {
+  it('reproduces the other species within the noted differences', () => {
     // [species, pressure bar, expected K, tolerance K, source]
     const checks: Array<[string, number, number, number, string]> = [
       ['Mg2SiO4', 1e-3, 1442, 14, 'Lodders & Fegley 1993: 1442 K; the fit gives 1429 K (noted 13 K lower)'],
       ['MgSiO3', 1e-4, 1316, 12, 'Lodders 2003 (memory): ~1316 K; the fit gives 1305 K (noted 11 K lower)'],
       ['Al2O3', 1e-3, 1772, 15, 'Lodders & Fegley 1993: 1772 K; the fit gives 1758 K (noted 14 K lower)'],
       ['CaTiO3', 1e-3, 1687, 9, 'Lodders & Fegley 1993: 1687 K; the fit gives 1679 K (noted 8 K lower)'],
-      // Solar-metallicity values at 1 bar, derived in reference/physics.md from the same fits (to 1 K):
+      // Solar-metallicity values at 1 bar, derived from the same fits (to 1 K):
       ['Cr', 1, 1521, 1, 'derived 1521 K'],
       ['MnS', 1, 1342, 1, 'derived 1342 K'],
       ['Na2S', 1, 995, 1, 'derived 995 K'],
@@ -88,7 +88,7 @@ describe('saturation vapour pressure (H2O, NH3, CH4)', () => {
   it('reproduces the ice vapour pressure at -40 degC and the methane triple point', () => {
     // Ice at -40 degC: 0.1284 hPa (standard meteorological tables, from memory); within 0.5 %.
     expect(Math.abs(SATURATION_CURVES.H2O!.saturationPressureBar(233.15) / 1.284e-4 - 1)).toBeLessThan(5e-3);
-    // CH4 triple point 90.68 K, 0.11719 bar (reference/physics.md, secondary): the curve passes through it.
+    // CH4 triple point 90.68 K, 0.11719 bar (secondary, from memory): the curve passes through it.
     expect(SATURATION_CURVES.CH4!.saturationPressureBar(90.68)).toBeCloseTo(0.11719, 10);
   });
 

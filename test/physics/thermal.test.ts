@@ -9,7 +9,7 @@ const tess = resolveBand('tess');
 
 describe('thermal eclipse depth', () => {
   it('is k^2 F_band(T_day) / F_band(T*)', () => {
-    // DESIGN section 3 / reference/physics.md (derived)
+    // derived from the band-flux ratio k^2 F(T_day) / F(T*)
     expect(thermalEclipseDepth(0.1, 2000, 5800, tess)).toBeCloseTo(0.01 * bandFluxRatio(tess, 2000, 5800), 18);
   });
 

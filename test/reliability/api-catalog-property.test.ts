@@ -1,8 +1,8 @@
 /**
- * Property tests of the catalog routes under hostile input (issue 8): POST of mutated
+ * Property tests of the catalog routes under hostile input: POST of mutated
  * entries (with hostile source records), PATCH of a user entry made for the test and of
  * curated entries, DELETE with odd ids, and every GET route with odd query strings and
- * path segments. Every answer keeps the contract (harness), and the database (every
+ * path segments. Every answer keeps the documented error format (harness), and the database (every
  * row of every table) changes only when a writing route answered 2xx; a curated row is
  * never changed and an added row is always a user row.
  */
@@ -68,7 +68,7 @@ const entryMutation = mutationOf(entryPaths, baseEntry, (_p, o) => fc.oneof({ ar
 let serial = 0;
 
 describe('POST /api/catalog/entries under hostile bodies', () => {
-  it('mutated entries: 201 with a user row, or a contract 4xx and no change', async () => {
+  it('mutated entries: 201 with a user row, or a documented 4xx and no change', async () => {
     await fc.assert(
       fc.asyncProperty(fc.array(entryMutation, { minLength: 1, maxLength: 3 }), async (ms) => {
         const start = { ...baseEntry, id: `reliability-new-${serial++}` };
@@ -115,7 +115,7 @@ const patchType = fc.oneof(
 );
 
 describe('PATCH /api/catalog/entries/:id under hostile bodies', () => {
-  it('on a user entry: 200 keeping it a user row with its id, or a contract 4xx and no change', async () => {
+  it('on a user entry: 200 keeping it a user row with its id, or a documented 4xx and no change', async () => {
     await fc.assert(
       fc.asyncProperty(patchBody, patchType, async (body, t) => {
         const a = await send(api.app, { method: 'PATCH', url: `/api/catalog/entries/${TARGET}`, body, contentType: t.type });
@@ -183,7 +183,7 @@ const getUrl = fc.oneof(
 );
 
 describe('GET routes with odd query strings and path segments', () => {
-  it('answer 2xx or a contract 4xx and change nothing', async () => {
+  it('answer 2xx or a documented 4xx and change nothing', async () => {
     await fc.assert(
       fc.asyncProperty(getUrl, fc.constantFrom('GET', 'HEAD'), async (url, method) => {
         const a = await send(api.app, { method, url });

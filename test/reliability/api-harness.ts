@@ -1,6 +1,6 @@
 /**
  * Shared pieces of the API property tests: sending a request as raw text with any
- * content type, the contract every answer must keep (never a 5xx; every 4xx a JSON
+ * content type, the rules every answer must keep (never a 5xx; every 4xx a JSON
  * error body whose issues name a path), a guard that the database changes only when a
  * writing route answered 2xx, and generators of hostile JSON values and raw JSON text.
  */
@@ -72,7 +72,7 @@ export interface ErrorShape {
   issues: Array<{ path: string; message: string }>;
 }
 
-/** Never a 5xx; a 4xx carries the contract body with at least one issue, each naming a path. */
+/** Never a 5xx; a 4xx carries the documented error body with at least one issue, each naming a path. */
 export function expectContract(a: Answer, what: string): ErrorShape | undefined {
   expect(a.status, `${what}: ${a.text.slice(0, 300)}`).toBeLessThan(500);
   expect(a.status, what).toBeGreaterThanOrEqual(200);

@@ -1,10 +1,10 @@
 /**
- * Property tests of POST /api/interpret and POST /api/report under hostile bodies
- * (issue 8): fields of an invented demo system replaced by wrong types, extreme
+ * Property tests of POST /api/interpret and POST /api/report under hostile bodies:
+ * fields of an invented demo system replaced by wrong types, extreme
  * numbers, NaN and Infinity spelled as strings, unicode, huge arrays and deep nests;
  * whole bodies of any shape; and raw text: truncated JSON, repeated keys, -0 and 1e999
  * tokens, empty bodies, wrong content types, bytes that are not UTF-8, bodies over the
- * size limit. Every answer keeps the contract (harness: never a 5xx, every 4xx a JSON
+ * size limit. Every answer keeps the documented error format (harness: never a 5xx, every 4xx a JSON
  * error body with issues naming a path) and no request changes the database. Valid
  * bodies are computed for real on 200 draws and 64 grid nodes, so they stay cheap.
  */
@@ -98,7 +98,7 @@ function describeMutations(ms: Mutation[]): string {
 }
 
 describe('POST /api/interpret and /api/report under hostile system bodies', () => {
-  it('one to three mutated fields of a demo system: 2xx or a contract 4xx, never a 5xx', async () => {
+  it('one to three mutated fields of a demo system: 2xx or a documented 4xx, never a 5xx', async () => {
     await fc.assert(
       fc.asyncProperty(mutations, async (ms) => {
         const body = toJsonText(ms.reduce<unknown>((b, m) => applyMutation(b, m), base));
@@ -131,7 +131,7 @@ describe('POST /api/interpret and /api/report under hostile system bodies', () =
     );
   });
 
-  it('whole bodies of any shape are refused with a contract 400 (413 when over 1 MiB)', async () => {
+  it('whole bodies of any shape are refused with a documented 400 (413 when over 1 MiB)', async () => {
     const anyBody = fc.oneof(hostileValue, fc.jsonValue({ maxDepth: 5 }), fc.array(hostileValue, { maxLength: 5 }));
     await fc.assert(
       fc.asyncProperty(anyBody, fc.constantFrom('/api/interpret', '/api/report'), async (v, url) => {
@@ -218,7 +218,7 @@ describe('POST /api/interpret and /api/report under hostile raw text', () => {
     );
   });
 
-  it('bytes that are not UTF-8, and raw number tokens in fields, are answered within the contract', async () => {
+  it('bytes that are not UTF-8, and raw number tokens in fields, are answered with documented errors', async () => {
     const bytes = fc.uint8Array({ minLength: 0, maxLength: 200 });
     const tokens = fc.tuple(fc.constantFrom(...paths.filter((p) => p.length > 1)), extremeNumberTokens);
     await fc.assert(

@@ -1,5 +1,5 @@
 /**
- * Crash safety of the catalog (issue on reliability): a process killed with SIGKILL in
+ * Crash safety of the catalog: a process killed with SIGKILL in
  * the middle of a 10 000-row import leaves all of the rows or none; two processes
  * adding user entries at once both succeed (busy timeout) and every row is present.
  */

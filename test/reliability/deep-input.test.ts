@@ -1,5 +1,5 @@
 /**
- * Deep and huge input (issue 8): a system file nested 100 000 levels, or holding a
+ * Deep and huge input: a system file nested 100 000 levels, or holding a
  * 10 MB string, a 10 MB key or a million-item array, is bad input: `hesper interpret`
  * exits 2 with a short message naming the field, never 1, never a stack overflow. A
  * JSON parser that runs out of stack on such text (RangeError) is bad input too, for

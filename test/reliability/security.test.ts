@@ -1,5 +1,5 @@
 /**
- * Security of the HTTP API (issue 8): loopback by default; no route reads or writes a
+ * Security of the HTTP API: loopback by default; no route reads or writes a
  * path the client names; failures answer a generic 500 with no stack trace, file name
  * or SQL (the details go to the log); JSON routes take JSON only (415 otherwise); the
  * page and its scripts carry their right content types and X-Content-Type-Options.

@@ -1,6 +1,6 @@
 /**
  * zod schemas shared by the routes and the OpenAPI document: the error body of
- * DESIGN section 7, posterior summaries, bands and the health answer. Each schema is
+ * the documented error body, posterior summaries, bands and the health answer. Each schema is
  * registered under a component name in `apiRegistry`, so the document is generated
  * from the very schemas the routes and tests use.
  */

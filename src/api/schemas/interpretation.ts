@@ -1,5 +1,5 @@
 /**
- * The interpretation JSON (DESIGN section 7, "Interpretation") as a zod schema, for the
+ * The interpretation JSON as a zod schema, for the
  * OpenAPI document and for tests that check every answer against it. `conformsToSchema`
  * makes the type checker confirm that the library's Interpretation type fits.
  */
@@ -55,7 +55,7 @@ export const interpretationSchema = z.strictObject({
   }),
   warnings: z.array(z.string()),
 });
-apiRegistry.add(interpretationSchema, { id: 'Interpretation', description: 'The interpretation of one system (DESIGN section 7).' });
+apiRegistry.add(interpretationSchema, { id: 'Interpretation', description: 'The interpretation of one system.' });
 
 /** Compile-time check: the library's result is an instance of the published schema. */
 export function conformsToSchema(result: Interpretation): z.input<typeof interpretationSchema> {

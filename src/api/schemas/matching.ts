@@ -1,5 +1,5 @@
 /**
- * The parts the interpretation adds to the albedo posterior (DESIGN section 6): the
+ * The parts the interpretation adds to the albedo posterior: the
  * catalog candidates, the clouds-or-ice verdict, the single-scattering albedo a thick
  * cloud would need, and the reading of a measured phase offset.
  */

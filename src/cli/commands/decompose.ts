@@ -2,7 +2,7 @@
  * `hesper decompose CURVE.csv --period DAYS --epoch BJD`: fold a light curve, mask the
  * transit and separate the planet's phase term and eclipse from the star's ellipsoidal
  * and beaming signals (src/lightcurve/decompose.ts). Readable report by default, the
- * DESIGN section 7 decomposition JSON with --json, and --system-out writes the
+ * decomposition JSON with --json, and --system-out writes the
  * measurement block of a system file.
  */
 import { writeFileSync } from 'node:fs';
@@ -160,7 +160,7 @@ const round = (x: number): number => Number(x.toPrecision(4));
 const rounded = (q: ValueSigma): ValueSigma => ({ value: round(q.value), sigma: round(q.sigma) });
 
 /**
- * The measurement block of a system file (DESIGN section 7 field names): only what the
+ * The measurement block of a system file (its field names): only what the
  * fit measured. A beaming fixed from a prediction is an input, so it is left out.
  */
 export function measurementBlock(r: Decomposition): { measurements: Record<string, ValueSigma> } {

@@ -1,7 +1,7 @@
 /**
  * `hesper interpret FILE`: the albedo posterior of one system file matched to the
  * catalog, with the clouds-or-ice verdict, the candidates and the composition
- * paragraph. `--json` prints the contract JSON, `--report md|tex` the paragraphs
+ * paragraph. `--json` prints the interpretation as JSON, `--report md|tex` the paragraphs
  * alone; `--bib` and `--figure` write the BibTeX of every cited source and the SVG
  * figure. The catalog opens from --db, else HESPER_DB, else the default file.
  */
@@ -91,7 +91,7 @@ export function registerInterpret(program: Command, io: CliIo): void {
     .command('interpret')
     .description('geometric and Bond albedo, thermal share, catalog candidates and the clouds-or-ice verdict from a system file')
     .argument('<file>', 'system file (JSON); `hesper` validates it and names every bad field')
-    .option('--json', 'print the contract JSON instead of the readable report')
+    .option('--json', 'print the interpretation as JSON instead of the readable report')
     .addOption(new Option('--report <format>', 'print the composition paragraphs alone, as Markdown or LaTeX').choices([...REPORT_FORMATS]))
     .option('--bib <file>', 'write the BibTeX of every source the paragraphs cite to FILE')
     .option('--figure <file.svg>', 'write the A_g posterior with the candidates\' intervals as an SVG figure')
