@@ -6,8 +6,9 @@
  */
 import { csvLine } from './csv.ts';
 import type { CatalogEntry } from './types.ts';
-import { CATEGORIES, PROVENANCES, QUANTITIES } from './vocab.ts';
+import { CATEGORIES, PLANET_CLASSES, PROVENANCES, QUANTITIES, USER_PROVENANCE } from './vocab.ts';
 
+/** keys: a list separated by ";" (source keys, planet classes). */
 type Kind = 'text' | 'number' | 'keys';
 
 export interface Column {
@@ -32,7 +33,8 @@ export const CSV_COLUMNS: readonly Column[] = [
   { name: 'temperature_min_k', field: 'temperatureMinK', kind: 'number', required: false, help: 'lowest temperature where it applies, K (empty = none)' },
   { name: 'temperature_max_k', field: 'temperatureMaxK', kind: 'number', required: false, help: 'highest temperature where it applies, K (empty = none)' },
   { name: 'condensate', field: 'condensate', kind: 'text', required: false, help: 'condensing species, e.g. MgSiO3 (empty = none)' },
-  { name: 'provenance', field: 'provenance', kind: 'text', required: true, help: PROVENANCES.join('|') },
+  { name: 'provenance', field: 'provenance', kind: 'text', required: false, help: `${PROVENANCES.join('|')} (empty = ${USER_PROVENANCE})` },
+  { name: 'applies_to', field: 'appliesTo', kind: 'keys', required: false, help: `planet classes separated by ";": ${PLANET_CLASSES.join('|')} (empty = any)` },
   { name: 'sources', field: 'sources', kind: 'keys', required: true, help: 'existing source keys separated by ";"' },
   { name: 'description', field: 'description', kind: 'text', required: false, help: 'free text' },
 ];

@@ -12,9 +12,15 @@ import { prepareBatch, writeBatch, type BatchItem, type Problem } from './user-e
 
 const NUMBER = /^[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$/;
 
+/** Optional columns whose empty cell means "use the default" rather than null. */
+const DEFAULTED_FIELDS = new Set<string>(['provenance', 'appliesTo']);
+
 function cellValue(col: Column, cell: string, at: string, problems: Problem[]): unknown {
   const text = cell.trim();
-  if (text === '') return col.kind === 'keys' ? [] : col.required ? undefined : col.kind === 'text' && col.field === 'description' ? '' : null;
+  if (text === '') {
+    if (col.required || DEFAULTED_FIELDS.has(col.field)) return col.kind === 'keys' && col.required ? [] : undefined;
+    return col.field === 'description' ? '' : null;
+  }
   if (col.kind === 'number') {
     if (!NUMBER.test(text)) {
       problems.push({ path: `${at}, ${col.name}`, code: 'invalid-input', message: `"${text}" is not a number`, value: text });

@@ -1,17 +1,22 @@
 /**
- * zod schemas of the catalog-entry JSON format and of source
- * records. Used by `catalog add`, the HTTP API, CSV import and the seed loader, so
+ * zod schemas of the catalog-entry JSON format and of source records. Used by `catalog add`, the HTTP API, CSV import and the seed loader, so
  * every way into the catalog applies the same rules as the database CHECKs.
  */
 import { z } from 'zod';
 import {
+  BIBCODE_PATTERN,
   CATEGORIES,
+  CURATED_PROVENANCES,
+  DEFAULT_APPLIES_TO,
   ENTRY_ID_PATTERN,
   ORIGINS,
+  PLANET_CLASSES,
   PROVENANCES,
   QUANTITIES,
   SOURCE_KEY_PATTERN,
   SOURCE_TYPES,
+  USER_PROVENANCE,
+  type PlanetClass,
 } from './vocab.ts';
 
 const optionalText = (max: number) => z.string().trim().min(1).max(max).nullable().optional();
@@ -68,6 +73,12 @@ export const sourceRecordSchema = z
       .regex(/^(\d{4}\.\d{4,5}|[a-z-]+(\.[A-Z]{2})?\/\d{7})(v\d+)?$/, 'an arXiv id looks like 1609.05048 or astro-ph/9910504')
       .nullable()
       .optional(),
+    bibcode: z
+      .string()
+      .trim()
+      .regex(BIBCODE_PATTERN, 'an ADS bibcode has 19 characters: year, journal, volume, page and initial padded with dots, e.g. 2017Icar..282...19M')
+      .nullable()
+      .optional(),
     url: z
       .string()
       .trim()
@@ -86,6 +97,23 @@ const positive = finite.positive('must be > 0');
 
 const spectrumPointSchema = z.object({ wavelengthNm: positive, value: nonNegative }).strict();
 
+/**
+ * The planet classes an entry applies to: a non-empty list without repeats, "any"
+ * alone; returned in the order of PLANET_CLASSES.
+ */
+export const appliesToSchema = z
+  .array(z.enum(PLANET_CLASSES))
+  .min(1, `list at least one planet class (${PLANET_CLASSES.join(', ')})`)
+  .superRefine((list, ctx) => {
+    const seen = new Set<string>();
+    list.forEach((c, i) => {
+      if (seen.has(c)) ctx.addIssue({ code: 'custom', path: [i], message: `planet class ${c} is listed twice` });
+      seen.add(c);
+    });
+    if (list.includes('any') && list.length > 1) ctx.addIssue({ code: 'custom', path: [], message: '"any" already covers every planet class: list it alone' });
+  })
+  .transform((list) => PLANET_CLASSES.filter((c) => list.includes(c)) as PlanetClass[]);
+
 /** The fields every entry shape shares; `sources` differs between users and seeds. */
 const entryFields = {
   id: z.string().regex(ENTRY_ID_PATTERN, 'an id is a slug: lower-case letters, digits and inner hyphens, at most 80 characters'),
@@ -101,7 +129,6 @@ const entryFields = {
   temperatureMaxK: positive.nullable().default(null),
   condensate: z.string().trim().min(1).max(60).nullable().default(null),
   description: z.string().max(4000).default(''),
-  provenance: z.enum(PROVENANCES),
   spectrum: z.array(spectrumPointSchema).max(10000).default([]),
   /** Accepted so exported entries can be re-added; entries added are always user rows. */
   origin: z.enum(ORIGINS).optional(),
@@ -147,19 +174,29 @@ function checkCrossFields(e: CrossFields, ctx: z.RefinementCtx): void {
   });
 }
 
-/** A catalog entry as users and the API give it: sources are keys or full records. */
+/**
+ * A catalog entry as users and the API give it: sources are keys or full records;
+ * provenance defaults to user and appliesTo to ["any"].
+ */
 export const catalogEntryInputSchema = z
   .object({
     ...entryFields,
+    provenance: z.enum(PROVENANCES).default(USER_PROVENANCE),
+    appliesTo: appliesToSchema.default([...DEFAULT_APPLIES_TO]),
     sources: z.array(z.union([sourceKeySchema, sourceRecordSchema])).min(1, 'at least one source is required'),
   })
   .strict()
   .superRefine(checkCrossFields);
 
-/** A curated entry in seeds/*.json: sources are keys of the seed source records. */
+/**
+ * A curated entry in seeds/*.json: sources are keys of the seed source records; the
+ * provenance is one of the curated tags and appliesTo is required.
+ */
 export const seedEntrySchema = z
   .object({
     ...entryFields,
+    provenance: z.enum(CURATED_PROVENANCES),
+    appliesTo: appliesToSchema,
     sources: z.array(sourceKeySchema).min(1, 'at least one source is required'),
   })
   .strict()
@@ -180,7 +217,8 @@ export const catalogEntryPatchSchema = z
     temperatureMaxK: positive.nullable(),
     condensate: z.string().trim().min(1).max(60).nullable(),
     description: z.string().max(4000),
-    provenance: entryFields.provenance,
+    provenance: z.enum(PROVENANCES),
+    appliesTo: appliesToSchema,
     spectrum: z.array(spectrumPointSchema).max(10000),
     sources: z.array(z.union([sourceKeySchema, sourceRecordSchema])).min(1, 'at least one source is required'),
   })

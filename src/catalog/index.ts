@@ -11,15 +11,37 @@ export type { CatalogStats, ExportFormat, ExportedEntry } from './reader.ts';
 export type { OpenCatalogOptions } from './open-db.ts';
 
 /** JSON shapes the catalog hands out. */
-export type { CatalogEntry, CondensateCurve, EntryFilter, ImportReport, SeedReport, SourceRecord, SpectrumPoint } from './types.ts';
+export type {
+  CatalogEntry,
+  ComparisonBand,
+  ComparisonEntry,
+  CondensateCurve,
+  EntryFilter,
+  ImportReport,
+  SeedReport,
+  SourceRecord,
+  SpectrumPoint,
+} from './types.ts';
 
 /** zod schemas of the catalog-entry JSON format, for the API and file readers. */
-export { catalogEntryInputSchema, catalogEntryPatchSchema, sourceRecordSchema, seedEntrySchema } from './entry-schema.ts';
+export { appliesToSchema, catalogEntryInputSchema, catalogEntryPatchSchema, sourceRecordSchema, seedEntrySchema } from './entry-schema.ts';
 export type { CatalogEntryInput, CatalogEntryPatch, SourceRecordInput } from './entry-schema.ts';
 
 /** Vocabularies (categories, quantities, provenance words) and file locations. */
-export { CATEGORIES, ORIGINS, PROVENANCES, QUANTITIES, SOURCE_TYPES } from './vocab.ts';
-export type { Category, Origin, Provenance, Quantity, SourceType } from './vocab.ts';
+export {
+  CATEGORIES,
+  COMPARISON_KINDS,
+  CURATED_PROVENANCES,
+  DEFAULT_APPLIES_TO,
+  ORIGINS,
+  PLANET_CLASSES,
+  PROVENANCES,
+  QUANTITIES,
+  SOURCE_TYPES,
+  USER_PROVENANCE,
+  adsUrl,
+} from './vocab.ts';
+export type { Category, ComparisonKind, CuratedProvenance, Origin, PlanetClass, Provenance, Quantity, SourceType } from './vocab.ts';
 export { DEFAULT_DB_PATH, MIGRATIONS_DIR, SEEDS_DIR, resolveDbPath } from './paths.ts';
 
 /** The CSV columns of `catalog import` / `catalog export --format csv`. */

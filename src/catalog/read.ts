@@ -1,31 +1,35 @@
 /**
- * Reading the catalog: rows to the JSON shapes of types.ts. Plain prepared statements
- * on better-sqlite3 (column aliases give drizzle's field names, so the row types are
- * the schema's own inferred types); drizzle-orm's query builder is not loaded on this
- * path, which keeps `hesper catalog list` quick.
+ * Reading the catalog: rows to the JSON shapes of types.ts, through drizzle-orm's query
+ * builder (row types are the schema's own inferred types). The text search runs over
+ * the listed entries in JavaScript, where it also covers the cited source keys.
  */
 import type Database from 'better-sqlite3';
+import { and, asc, eq, getTableColumns } from 'drizzle-orm';
 import { HesperError, inputError } from '../errors.ts';
-import type { condensates, entries, sources } from './schema.ts';
-import type { CatalogEntry, CondensateCurve, EntryFilter, SourceRecord, SpectrumPoint } from './types.ts';
-import { CATEGORIES, ORIGINS, type Category, type Origin, type Provenance, type Quantity, type SourceType } from './vocab.ts';
+import { orm } from './orm.ts';
+import { comparisonSources, comparisons, condensates, entries, entrySources, sources, spectra } from './schema.ts';
+import type {
+  CatalogEntry,
+  ComparisonEntry,
+  ComparisonRow,
+  CondensateCurve,
+  EntryFilter,
+  EntryRow,
+  SourceRecord,
+  SourceRow,
+  SpectrumPoint,
+} from './types.ts';
+import { CATEGORIES, ORIGINS, appliesToList, type Category, type Origin } from './vocab.ts';
 
-type EntryRow = Omit<typeof entries.$inferSelect, 'createdAt' | 'updatedAt'>;
-type SourceRow = Omit<typeof sources.$inferSelect, 'createdAt' | 'updatedAt'>;
-type CondensateRow = typeof condensates.$inferSelect;
-
-const ENTRY_COLUMNS = `id, name, category, description, quantity, band_min_nm AS bandMinNm, band_max_nm AS bandMaxNm,
-  value_min AS valueMin, value_max AS valueMax, value_nominal AS valueNominal,
-  temperature_min_k AS temperatureMinK, temperature_max_k AS temperatureMaxK, condensate, provenance, origin`;
-
-const SOURCE_COLUMNS = `key, entry_type AS entryType, authors, year, title, journal, publisher, volume, pages, doi, arxiv, url, note, origin`;
+const { createdAt: _entryCreated, updatedAt: _entryUpdated, ...ENTRY_COLUMNS } = getTableColumns(entries);
+const { createdAt: _sourceCreated, updatedAt: _sourceUpdated, ...SOURCE_COLUMNS } = getTableColumns(sources);
 
 function toEntry(row: EntryRow, keys: string[], spectrum: SpectrumPoint[] | undefined): CatalogEntry {
   const entry: CatalogEntry = {
     id: row.id,
     name: row.name,
-    category: row.category as Category,
-    quantity: row.quantity as Quantity,
+    category: row.category,
+    quantity: row.quantity,
     bandMinNm: row.bandMinNm,
     bandMaxNm: row.bandMaxNm,
     valueMin: row.valueMin,
@@ -35,20 +39,21 @@ function toEntry(row: EntryRow, keys: string[], spectrum: SpectrumPoint[] | unde
     temperatureMaxK: row.temperatureMaxK,
     condensate: row.condensate,
     description: row.description,
-    provenance: row.provenance as Provenance,
+    provenance: row.provenance,
+    appliesTo: appliesToList(row.appliesTo),
     sources: keys,
-    origin: row.origin as Origin,
+    origin: row.origin,
   };
   if (spectrum !== undefined && spectrum.length > 0) entry.spectrum = spectrum;
   return entry;
 }
 
-function groupBy<T extends { entryId: string }, V>(rows: T[], pick: (r: T) => V): Map<string, V[]> {
+function groupBy<T, V>(rows: T[], keyOf: (r: T) => string, pick: (r: T) => V): Map<string, V[]> {
   const out = new Map<string, V[]>();
   for (const r of rows) {
-    const list = out.get(r.entryId);
+    const list = out.get(keyOf(r));
     if (list) list.push(pick(r));
-    else out.set(r.entryId, [pick(r)]);
+    else out.set(keyOf(r), [pick(r)]);
   }
   return out;
 }
@@ -71,26 +76,24 @@ function matches(entry: CatalogEntry, needle: string): boolean {
 /** Entries ordered by category then id, filtered by category, origin and a search text. */
 export function readEntries(db: Database.Database, filter: EntryFilter = {}): CatalogEntry[] {
   checkFilter(filter);
-  const where: string[] = [];
-  const params: string[] = [];
-  if (filter.category !== undefined) {
-    where.push('category = ?');
-    params.push(filter.category);
-  }
-  if (filter.origin !== undefined) {
-    where.push('origin = ?');
-    params.push(filter.origin);
-  }
-  const clause = where.length > 0 ? `WHERE ${where.join(' AND ')}` : '';
-  const rows = db.prepare(`SELECT ${ENTRY_COLUMNS} FROM entries ${clause} ORDER BY category, id`).all(...params) as EntryRow[];
-  const links = db
-    .prepare('SELECT entry_id AS entryId, source_key AS sourceKey FROM entry_sources ORDER BY entry_id, position, source_key')
-    .all() as { entryId: string; sourceKey: string }[];
-  const points = db
-    .prepare('SELECT entry_id AS entryId, wavelength_nm AS wavelengthNm, value FROM spectra ORDER BY entry_id, wavelength_nm')
-    .all() as (SpectrumPoint & { entryId: string })[];
-  const keysOf = groupBy(links, (l) => l.sourceKey);
-  const spectrumOf = groupBy(points, (p) => ({ wavelengthNm: p.wavelengthNm, value: p.value }));
+  const d = orm(db);
+  const where = and(
+    filter.category !== undefined ? eq(entries.category, filter.category as Category) : undefined,
+    filter.origin !== undefined ? eq(entries.origin, filter.origin as Origin) : undefined,
+  );
+  const rows = d.select(ENTRY_COLUMNS).from(entries).where(where).orderBy(asc(entries.category), asc(entries.id)).all();
+  const links = d
+    .select({ entryId: entrySources.entryId, sourceKey: entrySources.sourceKey })
+    .from(entrySources)
+    .orderBy(asc(entrySources.entryId), asc(entrySources.position), asc(entrySources.sourceKey))
+    .all();
+  const points = d
+    .select({ entryId: spectra.entryId, wavelengthNm: spectra.wavelengthNm, value: spectra.value })
+    .from(spectra)
+    .orderBy(asc(spectra.entryId), asc(spectra.wavelengthNm))
+    .all();
+  const keysOf = groupBy(links, (l) => l.entryId, (l) => l.sourceKey);
+  const spectrumOf = groupBy(points, (p) => p.entryId, (p) => ({ wavelengthNm: p.wavelengthNm, value: p.value }));
   const list = rows.map((r) => toEntry(r, keysOf.get(r.id) ?? [], spectrumOf.get(r.id)));
   const needle = filter.search?.trim().toLowerCase();
   return needle ? list.filter((e) => matches(e, needle)) : list;
@@ -98,12 +101,21 @@ export function readEntries(db: Database.Database, filter: EntryFilter = {}): Ca
 
 /** One entry, or undefined. */
 export function findEntry(db: Database.Database, id: string): CatalogEntry | undefined {
-  const row = db.prepare(`SELECT ${ENTRY_COLUMNS} FROM entries WHERE id = ?`).get(id) as EntryRow | undefined;
+  const d = orm(db);
+  const row = d.select(ENTRY_COLUMNS).from(entries).where(eq(entries.id, id)).get();
   if (!row) return undefined;
-  const keys = db.prepare('SELECT source_key AS k FROM entry_sources WHERE entry_id = ? ORDER BY position, source_key').all(id) as { k: string }[];
-  const spectrum = db
-    .prepare('SELECT wavelength_nm AS wavelengthNm, value FROM spectra WHERE entry_id = ? ORDER BY wavelength_nm')
-    .all(id) as SpectrumPoint[];
+  const keys = d
+    .select({ k: entrySources.sourceKey })
+    .from(entrySources)
+    .where(eq(entrySources.entryId, id))
+    .orderBy(asc(entrySources.position), asc(entrySources.sourceKey))
+    .all();
+  const spectrum = d
+    .select({ wavelengthNm: spectra.wavelengthNm, value: spectra.value })
+    .from(spectra)
+    .where(eq(spectra.entryId, id))
+    .orderBy(asc(spectra.wavelengthNm))
+    .all();
   return toEntry(row, keys.map((k) => k.k), spectrum);
 }
 
@@ -119,7 +131,7 @@ export function requireEntry(db: Database.Database, id: string): CatalogEntry {
 function toSource(row: SourceRow): SourceRecord {
   return {
     key: row.key,
-    type: row.entryType as SourceType,
+    type: row.entryType,
     authors: row.authors,
     year: row.year,
     title: row.title,
@@ -129,19 +141,19 @@ function toSource(row: SourceRow): SourceRecord {
     pages: row.pages,
     doi: row.doi,
     arxiv: row.arxiv,
+    bibcode: row.bibcode,
     url: row.url,
     note: row.note,
-    origin: row.origin as Origin,
+    origin: row.origin,
   };
 }
 
 export function readSources(db: Database.Database): SourceRecord[] {
-  const rows = db.prepare(`SELECT ${SOURCE_COLUMNS} FROM sources ORDER BY key`).all() as SourceRow[];
-  return rows.map(toSource);
+  return orm(db).select(SOURCE_COLUMNS).from(sources).orderBy(asc(sources.key)).all().map(toSource);
 }
 
 export function findSource(db: Database.Database, key: string): SourceRecord | undefined {
-  const row = db.prepare(`SELECT ${SOURCE_COLUMNS} FROM sources WHERE key = ?`).get(key) as SourceRow | undefined;
+  const row = orm(db).select(SOURCE_COLUMNS).from(sources).where(eq(sources.key, key)).get();
   return row ? toSource(row) : undefined;
 }
 
@@ -166,13 +178,7 @@ export function requireSources(db: Database.Database, keys: readonly string[]): 
 }
 
 export function readCondensates(db: Database.Database): CondensateCurve[] {
-  const rows = db
-    .prepare(
-      `SELECT species, a, b, c, d, valid_pressure_min_bar AS validPressureMinBar, valid_pressure_max_bar AS validPressureMaxBar,
-        valid_metallicity_min_dex AS validMetallicityMinDex, valid_metallicity_max_dex AS validMetallicityMaxDex,
-        source_key AS sourceKey, provenance, note FROM condensates ORDER BY species`,
-    )
-    .all() as CondensateRow[];
+  const rows = orm(db).select().from(condensates).orderBy(asc(condensates.species)).all();
   return rows.map((r) => ({
     species: r.species,
     a: r.a,
@@ -182,7 +188,42 @@ export function readCondensates(db: Database.Database): CondensateCurve[] {
     validPressureBar: [r.validPressureMinBar, r.validPressureMaxBar],
     validMetallicityDex: [r.validMetallicityMinDex, r.validMetallicityMaxDex],
     sourceKey: r.sourceKey,
-    provenance: r.provenance as Provenance,
+    provenance: r.provenance,
     note: r.note,
   }));
+}
+
+function toComparison(r: ComparisonRow, keys: string[]): ComparisonEntry {
+  const lo = r.equilibriumTemperatureMinK;
+  const hi = r.equilibriumTemperatureMaxK;
+  return {
+    id: r.id,
+    name: r.name,
+    kind: r.kind,
+    band: { id: r.bandId, minNm: r.bandMinNm, maxNm: r.bandMaxNm },
+    geometricAlbedoRange: [r.geometricAlbedoMin, r.geometricAlbedoMax],
+    geometricAlbedoNominal: r.geometricAlbedoNominal,
+    equilibriumTemperatureK: r.equilibriumTemperatureK,
+    equilibriumTemperatureRangeK: lo !== null && hi !== null ? [lo, hi] : null,
+    sources: keys,
+    provenance: r.provenance,
+    description: r.description,
+  };
+}
+
+/** The comparison set: planets first, then populations, each by equilibrium temperature. */
+export function readComparisons(db: Database.Database): ComparisonEntry[] {
+  const d = orm(db);
+  const rows = d
+    .select()
+    .from(comparisons)
+    .orderBy(asc(comparisons.kind), asc(comparisons.equilibriumTemperatureK), asc(comparisons.id))
+    .all();
+  const links = d
+    .select({ id: comparisonSources.comparisonId, key: comparisonSources.sourceKey })
+    .from(comparisonSources)
+    .orderBy(asc(comparisonSources.comparisonId), asc(comparisonSources.position), asc(comparisonSources.sourceKey))
+    .all();
+  const keysOf = groupBy(links, (l) => l.id, (l) => l.key);
+  return rows.map((r) => toComparison(r, keysOf.get(r.id) ?? []));
 }

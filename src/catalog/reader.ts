@@ -4,12 +4,15 @@
  * database actually needs seeding, which keeps `hesper catalog list` quick.
  */
 import type Database from 'better-sqlite3';
+import { count, countDistinct, eq } from 'drizzle-orm';
 import { inputError } from '../errors.ts';
 import { entriesToCsv } from './csv-columns.ts';
 import { openMigrated, type OpenCatalogOptions } from './open-db.ts';
-import { findSource, readCondensates, readEntries, readSources, requireEntry, requireSources } from './read.ts';
+import { orm } from './orm.ts';
+import { findSource, readComparisons, readCondensates, readEntries, readSources, requireEntry, requireSources } from './read.ts';
+import { comparisons, condensates, entries, sources } from './schema.ts';
 import { storedSeedHash } from './seed-apply.ts';
-import type { CatalogEntry, CondensateCurve, EntryFilter, SeedReport, SourceRecord } from './types.ts';
+import type { CatalogEntry, ComparisonEntry, CondensateCurve, EntryFilter, SeedReport, SourceRecord } from './types.ts';
 
 export type ExportFormat = 'json' | 'csv';
 export const EXPORT_FORMATS: readonly ExportFormat[] = ['json', 'csv'];
@@ -23,6 +26,7 @@ export interface CatalogStats {
   userEntries: number;
   sources: number;
   condensates: number;
+  comparisons: number;
   categories: number;
   seedHash: string | undefined;
   migrations: number;
@@ -72,6 +76,14 @@ export class CatalogReader {
   }
 
   /**
+   * The comparison set: measured geometric albedos of named exoplanets and of planet
+   * populations (planets first, then populations, each by equilibrium temperature).
+   */
+  listComparisons(): ComparisonEntry[] {
+    return readComparisons(this.db);
+  }
+
+  /**
    * Entries (all, or filtered) as text: csv in the import format plus an origin column;
    * json as an array of entries whose sources are full records.
    */
@@ -87,16 +99,19 @@ export class CatalogReader {
   }
 
   stats(): CatalogStats {
-    const count = (sql: string) => (this.db.prepare(sql).get() as { n: number }).n;
+    const d = orm(this.db);
+    const n = (row: { n: number } | undefined) => row?.n ?? 0;
     return {
       path: this.path,
-      entries: count('SELECT count(*) AS n FROM entries'),
-      userEntries: count("SELECT count(*) AS n FROM entries WHERE origin = 'user'"),
-      sources: count('SELECT count(*) AS n FROM sources'),
-      condensates: count('SELECT count(*) AS n FROM condensates'),
-      categories: count('SELECT count(DISTINCT category) AS n FROM entries'),
+      entries: n(d.select({ n: count() }).from(entries).get()),
+      userEntries: n(d.select({ n: count() }).from(entries).where(eq(entries.origin, 'user')).get()),
+      sources: n(d.select({ n: count() }).from(sources).get()),
+      condensates: n(d.select({ n: count() }).from(condensates).get()),
+      comparisons: n(d.select({ n: count() }).from(comparisons).get()),
+      categories: n(d.select({ n: countDistinct(entries.category) }).from(entries).get()),
       seedHash: storedSeedHash(this.db),
-      migrations: count('SELECT count(*) AS n FROM "__drizzle_migrations"'),
+      // drizzle's migration journal table is not part of the schema, so it is counted in SQL.
+      migrations: (this.db.prepare('SELECT count(*) AS n FROM "__drizzle_migrations"').get() as { n: number }).n,
     };
   }
 

@@ -3,16 +3,24 @@
  * inserted, updated where they changed, and deleted when the seeds no longer list
  * them; user rows (origin 'user') are never written, and a seed row whose id or key a
  * user row already holds is skipped and reported.
+ *
+ * Raw SQL on purpose: each upsert touches a curated row only when a field changed
+ * ("ON CONFLICT ... DO UPDATE ... WHERE origin = 'curated' AND (a IS NOT excluded.a
+ * OR ...)") and counts the rows it changed, and the retirements compare against the
+ * seed ids in one json_each() statement; prepared once, run a few hundred times.
  */
 import type Database from 'better-sqlite3';
+import { eq } from 'drizzle-orm';
+import { orm } from './orm.ts';
+import { catalogMeta } from './schema.ts';
 import type { SeedSet } from './seed-load.ts';
 import type { SeedReport } from './types.ts';
 import { entryParams } from './write.ts';
 
-const SOURCE_FIELDS = ['entry_type', 'authors', 'year', 'title', 'journal', 'publisher', 'volume', 'pages', 'doi', 'arxiv', 'url', 'note'];
+const SOURCE_FIELDS = ['entry_type', 'authors', 'year', 'title', 'journal', 'publisher', 'volume', 'pages', 'doi', 'arxiv', 'bibcode', 'url', 'note'];
 const ENTRY_FIELDS = [
   'name', 'category', 'description', 'quantity', 'band_min_nm', 'band_max_nm', 'value_min', 'value_max', 'value_nominal',
-  'temperature_min_k', 'temperature_max_k', 'condensate', 'provenance',
+  'temperature_min_k', 'temperature_max_k', 'condensate', 'provenance', 'applies_to',
 ];
 
 /** "ON CONFLICT ... DO UPDATE" that touches a curated row only when a field changed. */
@@ -25,8 +33,7 @@ function upsertTail(table: string, key: string, fields: string[]): string {
 export const META_SEED_HASH = 'seed_hash';
 
 export function storedSeedHash(db: Database.Database): string | undefined {
-  const row = db.prepare('SELECT value FROM catalog_meta WHERE key = ?').get(META_SEED_HASH) as { value: string } | undefined;
-  return row?.value;
+  return orm(db).select({ value: catalogMeta.value }).from(catalogMeta).where(eq(catalogMeta.key, META_SEED_HASH)).get()?.value;
 }
 
 /** Writes the seed set; call inside a transaction. */
@@ -36,8 +43,8 @@ export function applySeedSet(db: Database.Database, seeds: SeedSet, now: string)
   const skipped: string[] = [];
 
   const upsertSource = db.prepare(`INSERT INTO sources (key, entry_type, authors, year, title, journal, publisher, volume, pages, doi,
-    arxiv, url, note, origin, created_at, updated_at) VALUES (@key, @type, @authors, @year, @title, @journal, @publisher, @volume,
-    @pages, @doi, @arxiv, @url, @note, 'curated', @now, @now) ${upsertTail('sources', 'key', SOURCE_FIELDS)}`);
+    arxiv, bibcode, url, note, origin, created_at, updated_at) VALUES (@key, @type, @authors, @year, @title, @journal, @publisher, @volume,
+    @pages, @doi, @arxiv, @bibcode, @url, @note, 'curated', @now, @now) ${upsertTail('sources', 'key', SOURCE_FIELDS)}`);
   let changedSources = 0;
   for (const s of seeds.sources) {
     if (userKeys.has(s.key)) {
@@ -48,9 +55,9 @@ export function applySeedSet(db: Database.Database, seeds: SeedSet, now: string)
   }
 
   const upsertEntry = db.prepare(`INSERT INTO entries (id, name, category, description, quantity, band_min_nm, band_max_nm, value_min,
-    value_max, value_nominal, temperature_min_k, temperature_max_k, condensate, provenance, origin, created_at, updated_at)
+    value_max, value_nominal, temperature_min_k, temperature_max_k, condensate, provenance, applies_to, origin, created_at, updated_at)
     VALUES (@id, @name, @category, @description, @quantity, @bandMinNm, @bandMaxNm, @valueMin, @valueMax, @valueNominal,
-    @temperatureMinK, @temperatureMaxK, @condensate, @provenance, 'curated', @now, @now) ${upsertTail('entries', 'id', ENTRY_FIELDS)}`);
+    @temperatureMinK, @temperatureMaxK, @condensate, @provenance, @appliesTo, 'curated', @now, @now) ${upsertTail('entries', 'id', ENTRY_FIELDS)}`);
   const deleteLinks = db.prepare('DELETE FROM entry_sources WHERE entry_id = ?');
   const insertLink = db.prepare('INSERT INTO entry_sources (entry_id, source_key, position) VALUES (?, ?, ?)');
   const deletePoints = db.prepare('DELETE FROM spectra WHERE entry_id = ?');
@@ -61,9 +68,7 @@ export function applySeedSet(db: Database.Database, seeds: SeedSet, now: string)
       skipped.push(`entry ${e.id}`);
       continue;
     }
-    const params = entryParams(e, 'curated', now);
-    delete params.origin;
-    changedEntries += upsertEntry.run(params).changes;
+    changedEntries += upsertEntry.run(entryParams(e, now)).changes;
     deleteLinks.run(e.id);
     e.sources.forEach((k, i) => insertLink.run(e.id, k, i));
     deletePoints.run(e.id);
@@ -87,10 +92,24 @@ export function applySeedSet(db: Database.Database, seeds: SeedSet, now: string)
   }
   db.prepare('DELETE FROM condensates WHERE species NOT IN (SELECT value FROM json_each(?))').run(JSON.stringify(seeds.condensates.map((c) => c.species)));
 
+  // Comparison rows are curated only: replace them all, with their source links.
+  db.prepare('DELETE FROM comparisons').run();
+  const insertComparison = db.prepare(`INSERT INTO comparisons (id, name, kind, band_id, band_min_nm, band_max_nm, geometric_albedo_min,
+    geometric_albedo_nominal, geometric_albedo_max, equilibrium_temperature_k, equilibrium_temperature_min_k, equilibrium_temperature_max_k,
+    provenance, description) VALUES (@id, @name, @kind, @bandId, @bandMinNm, @bandMaxNm, @geometricAlbedoMin, @geometricAlbedoNominal,
+    @geometricAlbedoMax, @equilibriumTemperatureK, @equilibriumTemperatureMinK, @equilibriumTemperatureMaxK, @provenance, @description)`);
+  const insertComparisonLink = db.prepare('INSERT INTO comparison_sources (comparison_id, source_key, position) VALUES (?, ?, ?)');
+  for (const c of seeds.comparisons) {
+    const { sources: keys, ...row } = c;
+    insertComparison.run(row);
+    keys.forEach((k, i) => insertComparisonLink.run(c.id, k, i));
+  }
+
   // A retired curated source stays while any entry (a user's, say) still cites it.
   const removedSources = db
     .prepare(`DELETE FROM sources WHERE origin = 'curated' AND key NOT IN (SELECT value FROM json_each(?))
-      AND key NOT IN (SELECT source_key FROM entry_sources) AND key NOT IN (SELECT source_key FROM condensates)`)
+      AND key NOT IN (SELECT source_key FROM entry_sources) AND key NOT IN (SELECT source_key FROM condensates)
+      AND key NOT IN (SELECT source_key FROM comparison_sources)`)
     .run(JSON.stringify(seeds.sources.map((s) => s.key))).changes;
 
   const meta = db.prepare('INSERT INTO catalog_meta (key, value) VALUES (?, ?) ON CONFLICT(key) DO UPDATE SET value = excluded.value');
@@ -102,6 +121,7 @@ export function applySeedSet(db: Database.Database, seeds: SeedSet, now: string)
     entries: seeds.entries.length,
     sources: seeds.sources.length,
     condensates: seeds.condensates.length,
+    comparisons: seeds.comparisons.length,
     changedEntries,
     changedSources,
     removedEntries,

@@ -9,7 +9,7 @@ import path from 'node:path';
 import { HesperError } from '../errors.ts';
 
 /** Bump when the meaning of seed files changes without their bytes changing. */
-const SEED_FORMAT_VERSION = 'hesper-seeds-1';
+const SEED_FORMAT_VERSION = 'hesper-seeds-2';
 
 /** The seed files of a folder, sorted by name. */
 export function seedFiles(dir: string): string[] {

@@ -7,9 +7,10 @@ import { readFileSync } from 'node:fs';
 import path from 'node:path';
 import { z } from 'zod';
 import { HesperError, type Issue } from '../errors.ts';
+import { comparisonSeedSchema, type ComparisonSeedParsed } from './comparison-schema.ts';
 import { seedEntrySchema, sourceRecordSchema, type SeedEntryParsed } from './entry-schema.ts';
 import type { CondensateCurve, SourceRecord } from './types.ts';
-import { PROVENANCES } from './vocab.ts';
+import { CURATED_PROVENANCES } from './vocab.ts';
 import { seedFiles, seedHash } from './seed-hash.ts';
 import { normalizeSource } from './write.ts';
 import { issuesFromZod } from './zod-issues.ts';
@@ -26,7 +27,7 @@ export const condensateSeedSchema = z
     validPressureBar: z.tuple([finite.positive(), finite.positive()]),
     validMetallicityDex: z.tuple([finite, finite]),
     sourceKey: z.string().min(1),
-    provenance: z.enum(PROVENANCES),
+    provenance: z.enum(CURATED_PROVENANCES),
     note: z.string().max(4000).default(''),
   })
   .strict()
@@ -41,6 +42,7 @@ const seedFileShape = z
     sources: z.array(z.unknown()).default([]),
     entries: z.array(z.unknown()).default([]),
     condensates: z.array(z.unknown()).default([]),
+    comparisons: z.array(z.unknown()).default([]),
   })
   .strict();
 
@@ -50,6 +52,7 @@ export interface SeedSet {
   sources: Omit<SourceRecord, 'origin'>[];
   entries: SeedEntryParsed[];
   condensates: CondensateCurve[];
+  comparisons: ComparisonSeedParsed[];
 }
 
 function rowLabel(file: string, list: string, index: number, row: unknown, idField: string): string {
@@ -66,6 +69,7 @@ export function loadSeeds(dir: string): SeedSet {
   const sources: Omit<SourceRecord, 'origin'>[] = [];
   const entries: SeedEntryParsed[] = [];
   const condensates: CondensateCurve[] = [];
+  const comparisons: ComparisonSeedParsed[] = [];
   const where = new Map<string, string>();
   const claim = (kind: string, id: string, label: string, field: string) => {
     const k = `${kind}:${id}`;
@@ -109,11 +113,24 @@ export function loadSeeds(dir: string): SeedSet {
       condensates.push(r.data);
       where.set(`curve:${r.data.species}`, label);
     });
+    shape.data.comparisons.forEach((row, i) => {
+      const label = rowLabel(file, 'comparisons', i, row, 'id');
+      const r = comparisonSeedSchema.safeParse(row);
+      if (!r.success) return void issues.push(...issuesFromZod(r.error, label));
+      claim('comparison', r.data.id, label, 'id');
+      comparisons.push(r.data);
+      where.set(`cmp:${r.data.id}`, label);
+    });
   }
   const keys = new Set(sources.map((s) => s.key));
   for (const e of entries) {
     e.sources.forEach((k, i) => {
       if (!keys.has(k)) issues.push({ path: `${where.get(`row:${e.id}`)}.sources[${i}]`, message: `source key "${k}" is not defined in any seed file`, value: k });
+    });
+  }
+  for (const c of comparisons) {
+    c.sources.forEach((k, i) => {
+      if (!keys.has(k)) issues.push({ path: `${where.get(`cmp:${c.id}`)}.sources[${i}]`, message: `source key "${k}" is not defined in any seed file`, value: k });
     });
   }
   for (const c of condensates) {
@@ -124,5 +141,5 @@ export function loadSeeds(dir: string): SeedSet {
     const summary = issues.length === 1 ? `${first.path}: ${first.message}` : `${issues.length} problems, first ${first.path}: ${first.message}`;
     throw new HesperError('bad-seed', `seed files in ${dir} are invalid (${summary})`, issues, 'internal');
   }
-  return { hash, files, sources, entries, condensates };
+  return { hash, files, sources, entries, condensates, comparisons };
 }

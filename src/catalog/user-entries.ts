@@ -12,7 +12,7 @@ import {
 } from './entry-schema.ts';
 import { findEntry, findSource, requireEntry } from './read.ts';
 import type { CatalogEntry, SourceRecord } from './types.ts';
-import { insertEntry, insertSource, normalizeSource, replaceLinks, replaceSpectrum, sameSource, updateEntry } from './write.ts';
+import { deleteEntry, insertEntry, insertSource, normalizeSource, replaceLinks, replaceSpectrum, sameSource, updateEntry } from './write.ts';
 import { formatPath, issuesFromZod } from './zod-issues.ts';
 
 /** An issue with the error code it would raise on its own. */
@@ -135,7 +135,7 @@ export function removeUserEntry(db: Database.Database, id: string): CatalogEntry
   return db
     .transaction(() => {
       const entry = requireUserEntry(db, id, 'removed');
-      db.prepare('DELETE FROM entries WHERE id = ?').run(id);
+      deleteEntry(db, id);
       return entry;
     })
     .immediate();

@@ -1,53 +1,20 @@
 /**
- * Row writers shared by user additions, CSV import and updates. Callers run them
- * inside a transaction; each statement is prepared once per connection.
+ * Row writers shared by user additions, CSV import and updates, through drizzle-orm's
+ * query builder. Callers run them inside a transaction.
  */
 import type Database from 'better-sqlite3';
+import { eq } from 'drizzle-orm';
 import type { CatalogEntryParsed, SeedEntryParsed, SourceRecordParsed } from './entry-schema.ts';
+import { orm } from './orm.ts';
+import { entries, entrySources, sources, spectra } from './schema.ts';
 import type { SourceRecord, SpectrumPoint } from './types.ts';
-import type { Origin } from './vocab.ts';
+import { appliesToText, type Origin } from './vocab.ts';
 
 type EntryValues = Omit<CatalogEntryParsed | SeedEntryParsed, 'sources' | 'spectrum' | 'origin'>;
+type EntryInsert = typeof entries.$inferInsert;
 
-interface Writers {
-  insertEntry: Database.Statement;
-  updateEntry: Database.Statement;
-  deleteLinks: Database.Statement;
-  insertLink: Database.Statement;
-  deleteSpectrum: Database.Statement;
-  insertPoint: Database.Statement;
-  insertSource: Database.Statement;
-}
-
-const cache = new WeakMap<Database.Database, Writers>();
-
-function writers(db: Database.Database): Writers {
-  let w = cache.get(db);
-  if (!w) {
-    w = {
-      insertEntry: db.prepare(`INSERT INTO entries (id, name, category, description, quantity, band_min_nm, band_max_nm,
-        value_min, value_max, value_nominal, temperature_min_k, temperature_max_k, condensate, provenance, origin, created_at, updated_at)
-        VALUES (@id, @name, @category, @description, @quantity, @bandMinNm, @bandMaxNm, @valueMin, @valueMax, @valueNominal,
-        @temperatureMinK, @temperatureMaxK, @condensate, @provenance, @origin, @now, @now)`),
-      updateEntry: db.prepare(`UPDATE entries SET name = @name, category = @category, description = @description, quantity = @quantity,
-        band_min_nm = @bandMinNm, band_max_nm = @bandMaxNm, value_min = @valueMin, value_max = @valueMax, value_nominal = @valueNominal,
-        temperature_min_k = @temperatureMinK, temperature_max_k = @temperatureMaxK, condensate = @condensate, provenance = @provenance,
-        updated_at = @now WHERE id = @id`),
-      deleteLinks: db.prepare('DELETE FROM entry_sources WHERE entry_id = ?'),
-      insertLink: db.prepare('INSERT INTO entry_sources (entry_id, source_key, position) VALUES (?, ?, ?)'),
-      deleteSpectrum: db.prepare('DELETE FROM spectra WHERE entry_id = ?'),
-      insertPoint: db.prepare('INSERT INTO spectra (entry_id, wavelength_nm, value) VALUES (?, ?, ?)'),
-      insertSource: db.prepare(`INSERT INTO sources (key, entry_type, authors, year, title, journal, publisher, volume, pages, doi, arxiv,
-        url, note, origin, created_at, updated_at) VALUES (@key, @type, @authors, @year, @title, @journal, @publisher, @volume, @pages,
-        @doi, @arxiv, @url, @note, @origin, @now, @now)`),
-    };
-    cache.set(db, w);
-  }
-  return w;
-}
-
-/** The entry columns as named statement parameters. */
-export function entryParams(e: EntryValues, origin: Origin, now: string): Record<string, unknown> {
+/** The entry's columns (appliesTo as stored text), without origin and timestamps. */
+function entryColumns(e: EntryValues): Omit<EntryInsert, 'origin' | 'createdAt' | 'updatedAt'> {
   return {
     id: e.id,
     name: e.name,
@@ -63,9 +30,13 @@ export function entryParams(e: EntryValues, origin: Origin, now: string): Record
     temperatureMaxK: e.temperatureMaxK,
     condensate: e.condensate,
     provenance: e.provenance,
-    origin,
-    now,
+    appliesTo: appliesToText(e.appliesTo),
   };
+}
+
+/** The entry columns as named parameters of the raw seed upsert (seed-apply.ts). */
+export function entryParams(e: EntryValues, now: string): Record<string, unknown> {
+  return { ...entryColumns(e), now };
 }
 
 /** A source record with every optional field present (null when absent). */
@@ -82,39 +53,61 @@ export function normalizeSource(s: SourceRecordParsed): Omit<SourceRecord, 'orig
     pages: s.pages ?? null,
     doi: s.doi ?? null,
     arxiv: s.arxiv ?? null,
+    bibcode: s.bibcode ?? null,
     url: s.url ?? null,
     note: s.note ?? null,
   };
 }
 
+const SOURCE_FIELDS = ['key', 'type', 'authors', 'year', 'title', 'journal', 'publisher', 'volume', 'pages', 'doi', 'arxiv', 'bibcode', 'url', 'note'] as const;
+
 /** True when two records carry the same bibliographic details (origin aside). */
 export function sameSource(a: Omit<SourceRecord, 'origin'>, b: Omit<SourceRecord, 'origin'>): boolean {
-  const fields = ['key', 'type', 'authors', 'year', 'title', 'journal', 'publisher', 'volume', 'pages', 'doi', 'arxiv', 'url', 'note'] as const;
-  return fields.every((f) => a[f] === b[f]);
+  return SOURCE_FIELDS.every((f) => a[f] === b[f]);
 }
 
 export function insertEntry(db: Database.Database, e: EntryValues, origin: Origin, now: string): void {
-  writers(db).insertEntry.run(entryParams(e, origin, now));
+  orm(db)
+    .insert(entries)
+    .values({ ...entryColumns(e), origin, createdAt: now, updatedAt: now })
+    .run();
 }
 
 export function updateEntry(db: Database.Database, e: EntryValues, now: string): void {
-  const p = entryParams(e, 'user', now);
-  delete p.origin;
-  writers(db).updateEntry.run(p);
+  const { id, ...columns } = entryColumns(e);
+  orm(db)
+    .update(entries)
+    .set({ ...columns, updatedAt: now })
+    .where(eq(entries.id, id))
+    .run();
+}
+
+export function deleteEntry(db: Database.Database, id: string): void {
+  orm(db).delete(entries).where(eq(entries.id, id)).run();
 }
 
 export function replaceLinks(db: Database.Database, entryId: string, keys: readonly string[]): void {
-  const w = writers(db);
-  w.deleteLinks.run(entryId);
-  keys.forEach((k, i) => w.insertLink.run(entryId, k, i));
+  const d = orm(db);
+  d.delete(entrySources).where(eq(entrySources.entryId, entryId)).run();
+  if (keys.length > 0) d.insert(entrySources).values(keys.map((sourceKey, position) => ({ entryId, sourceKey, position }))).run();
 }
 
+/** Rows per multi-row INSERT of spectrum points: 3 parameters each, well below SQLite's limit of 32766. */
+const POINTS_PER_INSERT = 1000;
+
 export function replaceSpectrum(db: Database.Database, entryId: string, points: readonly SpectrumPoint[]): void {
-  const w = writers(db);
-  w.deleteSpectrum.run(entryId);
-  for (const p of points) w.insertPoint.run(entryId, p.wavelengthNm, p.value);
+  const d = orm(db);
+  d.delete(spectra).where(eq(spectra.entryId, entryId)).run();
+  for (let i = 0; i < points.length; i += POINTS_PER_INSERT) {
+    const chunk = points.slice(i, i + POINTS_PER_INSERT);
+    d.insert(spectra).values(chunk.map((p) => ({ entryId, wavelengthNm: p.wavelengthNm, value: p.value }))).run();
+  }
 }
 
 export function insertSource(db: Database.Database, s: Omit<SourceRecord, 'origin'>, origin: Origin, now: string): void {
-  writers(db).insertSource.run({ ...s, origin, now });
+  const { type, ...rest } = s;
+  orm(db)
+    .insert(sources)
+    .values({ ...rest, entryType: type, origin, createdAt: now, updatedAt: now })
+    .run();
 }

@@ -3,9 +3,10 @@
  * escaped for (La)TeX: the ten special characters, accented letters as accent
  * commands ({\'e}, {\v{z}}, {\'\i}) so classic 8-bit BibTeX keeps them, a few symbols
  * as math, and words with capitals after the first letter of the title braced so
- * bibliography styles keep their case. url and doi are verbatim fields.
+ * bibliography styles keep their case. url, adsurl and doi are verbatim fields.
  */
 import type { SourceRecord } from '../catalog/index.ts';
+import { adsUrl } from '../catalog/vocab.ts';
 
 /** Combining marks (after NFD) -> accent command; letter commands need a braced argument. */
 const ACCENTS: Record<string, string> = {
@@ -127,6 +128,7 @@ function fieldsOf(s: SourceRecord): [string, string][] {
     f.push(['eprint', verbatim(s.arxiv)]);
     f.push(['archiveprefix', 'arXiv']);
   }
+  if (s.bibcode) add('adsurl', adsUrl(s.bibcode), true);
   add('url', s.url, true);
   add('note', s.note);
   return f;

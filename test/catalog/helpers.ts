@@ -51,6 +51,8 @@ export function dumpDatabase(file: string, where: Record<string, string> = {}): 
       entry_sources: 'entry_id, source_key',
       spectra: 'entry_id, wavelength_nm',
       condensates: 'species',
+      comparisons: 'id',
+      comparison_sources: 'comparison_id, source_key',
       catalog_meta: 'key',
     };
     const out: Record<string, unknown[]> = {};

@@ -25,6 +25,7 @@ export function entry(over: Partial<CatalogEntry> & { id: string }): CatalogEntr
     condensate: null,
     description: 'invented for a test',
     provenance: 'memory',
+    appliesTo: ['any'],
     sources: [],
     origin: 'user',
     ...over,

@@ -19,7 +19,7 @@ afterAll(cleanupTemp);
 
 const record = (over: Partial<SourceRecord>): SourceRecord => ({
   key: 'Invented2026', type: 'article', authors: 'Nobody, A.', year: 2026, title: 'An invented title', journal: null, publisher: null,
-  volume: null, pages: null, doi: null, arxiv: null, url: null, note: null, origin: 'user', ...over,
+  volume: null, pages: null, doi: null, arxiv: null, bibcode: null, url: null, note: null, origin: 'user', ...over,
 });
 
 describe('BibTeX of the whole catalog', () => {

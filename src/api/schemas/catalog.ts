@@ -5,7 +5,7 @@
  */
 import { z } from 'zod';
 import {
-  CATEGORIES, ORIGINS, PROVENANCES, QUANTITIES, SOURCE_TYPES,
+  CATEGORIES, ORIGINS, PLANET_CLASSES, PROVENANCES, QUANTITIES, SOURCE_TYPES,
   catalogEntryInputSchema, catalogEntryPatchSchema,
   type CatalogEntry, type SourceRecord,
 } from '../../catalog/index.ts';
@@ -37,6 +37,7 @@ export const catalogEntrySchema = z.object({
   condensate: z.string().nullable(),
   description: z.string(),
   provenance: z.enum(PROVENANCES),
+  appliesTo: z.array(z.enum(PLANET_CLASSES)).describe('Planet classes the entry applies to; ["any"] when it is not restricted.'),
   sources: z.array(z.string()).describe('Keys of the sources; GET /api/catalog/sources has the records.'),
   origin: z.enum(ORIGINS).describe('curated rows come from the seeds and cannot be changed here; user rows can.'),
   spectrum: z.array(z.object({ wavelengthNm: z.number(), value: z.number() })).optional(),
@@ -58,6 +59,7 @@ export const sourceSchema = z.object({
   pages: z.string().nullable(),
   doi: z.string().nullable(),
   arxiv: z.string().nullable(),
+  bibcode: z.string().nullable().describe('ADS bibcode (19 characters).'),
   url: z.string().nullable(),
   note: z.string().nullable(),
   origin: z.enum(ORIGINS),

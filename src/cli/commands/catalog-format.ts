@@ -1,5 +1,5 @@
 /** Readable text for `hesper catalog list` and `catalog show`. */
-import type { CatalogEntry, SourceRecord } from '../../catalog/index.ts';
+import type { CatalogEntry, ComparisonEntry, SourceRecord } from '../../catalog/index.ts';
 
 /** Up to four significant digits, no trailing zeros. */
 export function num(v: number): string {
@@ -59,7 +59,9 @@ export function wrap(text: string, width: number, indent: string): string {
 export function citation(s: SourceRecord): string {
   const venue = [s.journal, s.publisher].filter(Boolean).join(', ');
   const where = [venue, s.volume, s.pages].filter(Boolean).join(' ');
-  const ids = [s.doi ? `doi:${s.doi}` : '', s.arxiv ? `arXiv:${s.arxiv}` : '', s.url ?? ''].filter(Boolean).join(' ');
+  const ids = [s.doi ? `doi:${s.doi}` : '', s.arxiv ? `arXiv:${s.arxiv}` : '', s.bibcode ? `ADS:${s.bibcode}` : '', s.url ?? '']
+    .filter(Boolean)
+    .join(' ');
   return [`${s.authors} (${s.year ?? 'n.d.'}).`, `${s.title}.`, where ? `${where}.` : '', ids].filter(Boolean).join(' ');
 }
 
@@ -74,6 +76,7 @@ export function entryDetail(e: CatalogEntry, sources: readonly SourceRecord[]): 
     ['temperature', temperatureText(e) ? `${temperatureText(e)} K` : 'no window recorded'],
     ['condensate', e.condensate ?? '-'],
     ['provenance', e.provenance],
+    ['applies to', e.appliesTo.join(', ')],
     ['origin', e.origin],
     ['description', e.description || '-'],
   ];
@@ -84,4 +87,18 @@ export function entryDetail(e: CatalogEntry, sources: readonly SourceRecord[]): 
     if (s.note) lines.push(`      note: ${wrap(s.note, 70, '            ')}`);
   }
   return lines.join('\n');
+}
+
+/** The comparison set as an aligned table. */
+export function comparisonTable(list: readonly ComparisonEntry[]): string {
+  const header = ['ID', 'KIND', 'BAND nm', 'A_g NOMINAL', 'A_g RANGE', 'T_eq K', 'PROVENANCE', 'SOURCES'];
+  const rows = list.map((c) => {
+    const band = `${c.band.id ? `${c.band.id} ` : ''}${num(c.band.minNm)}-${num(c.band.maxNm)}`;
+    const [lo, hi] = c.geometricAlbedoRange;
+    const t = c.equilibriumTemperatureRangeK;
+    const nominal = c.equilibriumTemperatureK === null ? '-' : num(c.equilibriumTemperatureK);
+    const temperature = t ? `${nominal} (${num(t[0])}-${num(t[1])})` : nominal;
+    return [c.id, c.kind, band, num(c.geometricAlbedoNominal), lo === hi ? num(lo) : `${num(lo)}-${num(hi)}`, temperature, c.provenance, c.sources.join(', ')];
+  });
+  return table(header, rows);
 }

@@ -1,5 +1,5 @@
 /**
- * `hesper catalog ...`: list, show, add, import, export, bib, seed, remove. Every
+ * `hesper catalog ...`: list, show, comparisons, add, import, export, bib, seed, remove. Every
  * subcommand takes --db PATH (else HESPER_DB, else db/hesper.sqlite); the database is
  * created, migrated and seeded on first use.
  */
@@ -15,7 +15,7 @@ import { CATEGORIES, ORIGINS } from '../../catalog/vocab.ts';
 import { inputError } from '../../errors.ts';
 import { toBibtex } from '../../report/bibtex.ts';
 import type { CliIo } from '../io.ts';
-import { entryDetail, entryTable } from './catalog-format.ts';
+import { comparisonTable, entryDetail, entryTable } from './catalog-format.ts';
 
 const DB_HELP = 'catalog database file (default: $HESPER_DB, else db/hesper.sqlite in the hesper folder)';
 
@@ -83,6 +83,22 @@ function registerRead(catalog: Command, io: CliIo): void {
       await withCatalog(io, opts, (c) => {
         const entry = c.getEntry(id);
         io.out(opts.json ? JSON.stringify(entry, null, 2) : entryDetail(entry, c.getSources(entry.sources)));
+      });
+    });
+
+  catalog
+    .command('comparisons')
+    .description('list the comparison set: measured geometric albedos of named exoplanets and of planet populations (not candidate materials)')
+    .option('--json', 'print the comparison rows as a JSON array')
+    .option('--db <path>', DB_HELP)
+    .action(async (opts: DbOption & { json?: boolean }) => {
+      await withCatalog(io, opts, (c) => {
+        const list = c.listComparisons();
+        if (opts.json) io.out(JSON.stringify(list, null, 2));
+        else {
+          io.out(comparisonTable(list));
+          io.err(`${list.length} comparison row${list.length === 1 ? '' : 's'}`);
+        }
       });
     });
 
