@@ -33,7 +33,7 @@ export type FileDecomposition = Decomposition & { files: CurveFileSummary[] };
 /** Options of `interpret` for the light-curve route. */
 export function addCurveOptions(cmd: Command): Command {
   return cmd
-    .option('--curve <file>', 'light curve CSV (time,flux,flux_err or phase,flux,flux_err): its decomposition replaces the measurements')
+    .option('--curve <file>', 'light curve, CSV (time,flux,flux_err or phase,flux,flux_err) or a FITS binary table (mission defaults, as in decompose): its decomposition replaces the measurements')
     .option('--epoch <bjd>', 'mid-transit time for --curve [days, the time system of the curve] (default: planet.transitEpochBjd)', numberOption('epoch'))
     .option('--period <days>', 'orbital period for --curve [days] (default: planet.periodDays)', numberOption('period', 0))
     .option('--bins <n>', 'fit the --curve binned into N phase bins', intOption('bins', 10, 1_000_000))

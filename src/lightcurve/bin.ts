@@ -17,24 +17,20 @@ export function binDesign(design: Design, bins: number, groups?: Int32Array): De
   requireInRange('bins', bins, { min: 2 });
   if (!Number.isInteger(bins)) throw inputError('out-of-range', 'bins', `bins = ${bins}: must be a whole number`, bins, 'integers >= 2');
   const { cols } = design;
-  // Cell of each row: (group, phase bin), numbered in order of first use.
-  const cellOf = new Int32Array(design.rows);
-  const cells = new Map<number, number>();
+  // Cell key of each row: group x bins + phase bin; the keys in use are numbered in
+  // increasing order (group, then phase), so the binned rows are sorted like the bins.
+  const keyOf = new Float64Array(design.rows);
   for (let r = 0; r < design.rows; r++) {
     const pb = Math.min(bins - 1, Math.floor(design.phase[r]! * bins));
-    const key = (groups ? groups[r]! * bins : 0) + pb;
-    let c = cells.get(key);
-    if (c === undefined) {
-      c = cells.size;
-      cells.set(key, c);
-    }
-    cellOf[r] = c;
+    keyOf[r] = (groups ? groups[r]! * bins : 0) + pb;
   }
-  // Cells in group then phase order, so that the binned rows are sorted like the bins.
-  const order = [...cells.entries()].sort((a, b) => a[0] - b[0]).map(([, c]) => c);
-  const rank = new Int32Array(cells.size);
-  order.forEach((c, k) => { rank[c] = k; });
-  const nCells = cells.size;
+  const keys = Float64Array.from(new Set(keyOf)).sort();
+  const index = new Map<number, number>();
+  keys.forEach((k, c) => index.set(k, c));
+  const cellOf = new Int32Array(design.rows);
+  for (let r = 0; r < design.rows; r++) cellOf[r] = index.get(keyOf[r]!)!;
+  const rank = Int32Array.from(keys, (_, c) => c);
+  const nCells = keys.length;
   const wSum = new Float64Array(nCells);
   const colSum = new Float64Array(nCells * cols);
   const fluxSum = new Float64Array(nCells);

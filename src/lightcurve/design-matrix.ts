@@ -79,7 +79,8 @@ export function buildDesign(input: DesignInput, shape: PhaseTermShape, geometry:
     if (base) {
       const seg = base.plan.segments[base.segmentOf[i]!]!;
       matrix[o + seg.firstColumn] = 1;
-      if (seg.order > 0) {
+      if (seg.order === 1) matrix[o + seg.firstColumn + 1] = (base.time[i]! - seg.midTime) / seg.halfSpan;
+      else if (seg.order > 1) {
         legendre((base.time[i]! - seg.midTime) / seg.halfSpan, seg.order, poly);
         for (let k = 0; k < seg.order; k++) matrix[o + seg.firstColumn + 1 + k] = poly[k]!;
       }

@@ -51,43 +51,49 @@ export function segmentCurve(curve: LightCurve, gapDays: number): Segmentation {
   const fileCount = curve.files?.length ?? 1;
   const fileIndex = curve.fileIndex;
   if (fileIndex && fileIndex.length !== n) throw inputError('invalid-input', 'curve.fileIndex', `fileIndex has ${fileIndex.length} entries for ${n} points`);
-  const byFile: number[][] = Array.from({ length: fileCount }, () => []);
+  // Counting sort of the point indices by file (stable: each file keeps its order).
+  const start = new Int32Array(fileCount + 1);
   for (let i = 0; i < n; i++) {
     const f = fileIndex ? fileIndex[i]! : 0;
     if (!(f >= 0 && f < fileCount)) throw inputError('invalid-input', 'curve.fileIndex', `point ${i} has file index ${f}, but there are ${fileCount} files`, f);
-    byFile[f]!.push(i);
+    start[f + 1]!++;
   }
+  for (let f = 0; f < fileCount; f++) start[f + 1] = start[f + 1]! + start[f]!;
+  const order = new Int32Array(n);
+  const fill = start.slice(0, fileCount);
+  for (let i = 0; i < n; i++) order[fill[fileIndex ? fileIndex[i]! : 0]!++] = i;
   const segmentOf = new Int32Array(n);
   const segments: Segment[] = [];
-  const label = (f: number): string => curve.files?.[f] ?? 'curve';
-  const push = (f: number, idx: number[]): void => {
-    if (idx.length === 0) return;
+  const timed = curve.column === 'time';
+  const x = curve.x;
+  const push = (f: number, from: number, to: number): void => {
+    if (to <= from) return;
     const s = segments.length;
-    for (const i of idx) segmentOf[i] = s;
-    const timed = curve.column === 'time';
+    const indices = order.subarray(from, to);
+    for (let k = 0; k < indices.length; k++) segmentOf[indices[k]!] = s;
     segments.push({
-      number: s + 1, file: label(f), fileIndex: f,
-      start: timed ? curve.x[idx[0]!]! : null, end: timed ? curve.x[idx[idx.length - 1]!]! : null,
-      indices: Int32Array.from(idx),
+      number: s + 1, file: curve.files?.[f] ?? 'curve', fileIndex: f,
+      start: timed ? x[indices[0]!]! : null, end: timed ? x[indices[indices.length - 1]!]! : null, indices,
     });
   };
   for (let f = 0; f < fileCount; f++) {
-    const idx = byFile[f]!;
-    if (curve.column === 'phase') {
-      push(f, idx);
+    const a = start[f]!;
+    const b = start[f + 1]!;
+    if (!timed) {
+      push(f, a, b);
       continue;
     }
-    idx.sort((a, b) => curve.x[a]! - curve.x[b]!);
-    let run: number[] = [];
-    for (const i of idx) {
-      const last = run[run.length - 1];
-      if (last !== undefined && curve.x[i]! - curve.x[last]! > gapDays) {
-        push(f, run);
-        run = [];
+    let sorted = true;
+    for (let k = a + 1; k < b && sorted; k++) sorted = x[order[k]!]! >= x[order[k - 1]!]!;
+    if (!sorted) order.set(Array.from(order.subarray(a, b)).sort((p, q) => x[p]! - x[q]!), a);
+    let from = a;
+    for (let k = a + 1; k < b; k++) {
+      if (x[order[k]!]! - x[order[k - 1]!]! > gapDays) {
+        push(f, from, k);
+        from = k;
       }
-      run.push(i);
     }
-    push(f, run);
+    push(f, from, b);
   }
   return { segmentOf, segments };
 }
@@ -152,19 +158,33 @@ export function planBaseline(curve: LightCurve, seg: Segmentation, keep: Uint8Ar
  * keeps the segments apart and the time information of the trends.
  */
 export function binGroups(curve: LightCurve, seg: Segmentation, plan: BaselinePlan, keep: Uint8Array, periodDays: number, epochDays: number | undefined): Int32Array {
-  const ids = new Map<string, number>();
-  const out: number[] = [];
+  const nSeg = seg.segments.length;
+  const byCycle = (s: number): boolean => plan.segments[s]!.order > 0 && curve.column === 'time';
+  const cycleOf = (i: number): number => Math.floor((curve.x[i]! - (epochDays ?? 0)) / periodDays);
+  // First and last cycle of each segment, then a block of ids per segment.
+  const lo = new Float64Array(nSeg).fill(Infinity);
+  const hi = new Float64Array(nSeg).fill(-Infinity);
+  let rows = 0;
+  for (let i = 0; i < keep.length; i++) {
+    if (!keep[i]) continue;
+    rows++;
+    const s = seg.segmentOf[i]!;
+    const c = byCycle(s) ? cycleOf(i) : 0;
+    if (c < lo[s]!) lo[s] = c;
+    if (c > hi[s]!) hi[s] = c;
+  }
+  const first = new Float64Array(nSeg);
+  let next = 0;
+  for (let s = 0; s < nSeg; s++) {
+    first[s] = next;
+    if (hi[s]! >= lo[s]!) next += hi[s]! - lo[s]! + 1;
+  }
+  const out = new Int32Array(rows);
+  let r = 0;
   for (let i = 0; i < keep.length; i++) {
     if (!keep[i]) continue;
     const s = seg.segmentOf[i]!;
-    const cycle = plan.segments[s]!.order > 0 && curve.column === 'time' ? Math.floor((curve.x[i]! - (epochDays ?? 0)) / periodDays) : 0;
-    const key = `${s}:${cycle}`;
-    let id = ids.get(key);
-    if (id === undefined) {
-      id = ids.size;
-      ids.set(key, id);
-    }
-    out.push(id);
+    out[r++] = first[s]! + (byCycle(s) ? cycleOf(i) - lo[s]! : 0);
   }
-  return Int32Array.from(out);
+  return out;
 }
