@@ -81,8 +81,16 @@ export const ERROR_CODES = {
     fix: 'Check the output path and its folder; give an output file other than the input.',
   },
   'bad-light-curve': {
-    meaning: 'A light-curve CSV has a missing column, a non-numeric cell, a non-positive flux_err, a phase outside [-1, 1], or times that are not strictly increasing.',
-    fix: 'Give a header time,flux,flux_err (or phase,flux,flux_err) and one row per point with strictly increasing times; lines starting with # are skipped; the message names the line.',
+    meaning: 'A light-curve file has a missing column (CSV or FITS), a non-numeric cell, a non-positive flux_err, a phase outside [-1, 1], times that are not strictly increasing, or no usable point.',
+    fix: 'CSV: a header time,flux,flux_err (or phase,flux,flux_err) and one row per point with strictly increasing times; lines starting with # are skipped; the message names the line. FITS: name the columns to use (the message lists those present).',
+  },
+  'bad-fits': {
+    meaning: 'A FITS file is malformed: truncated, a header card that is not 80-character ASCII, a missing END card or mandatory keyword, or sizes that do not fit the file.',
+    fix: 'Download the file again or check that it is FITS; the message names the header, the card or keyword, and the problem.',
+  },
+  'bad-star-spectrum': {
+    meaning: 'A stellar spectrum has a negative or non-finite flux, too few points, wavelengths that do not increase, or does not cover the band.',
+    fix: 'Give rows wavelength_nm,flux (or wavelength_um,flux) with strictly increasing wavelengths, fluxes >= 0 in any flux-density unit, covering the whole band.',
   },
   'degenerate-fit': {
     meaning: 'A term of the light-curve model has no data (e.g. no points in the eclipse) or is a combination of the other terms.',

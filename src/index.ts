@@ -41,6 +41,10 @@ export { condensationTemperatureK, condensationSpecies } from './physics/condens
 /** Light curves. */
 export { decompose, type DecomposeOptions, type Decomposition } from './lightcurve/decompose.ts';
 export { parseCurveCsv } from './io/curve-csv.ts';
+export {
+  joinCurves, parseLightCurveBytes, readLightCurveFile, readLightCurveFiles, type CurveColumnOptions, type CurveFileSummary, type ReadCurves,
+} from './io/curve-files.ts';
+export { DEFAULT_GAP_DAYS, DEFAULT_TREND_ORDER } from './lightcurve/segments.ts';
 
 /** Reports: terminal text, paragraphs for papers, BibTeX, figures. */
 export { textReport } from './report/text-report.ts';

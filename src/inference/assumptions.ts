@@ -1,6 +1,7 @@
 /** The assumptions that drove a result, in words, for the report and the JSON. */
 import type { Dist } from '../io/distribution.ts';
 import type { SystemInput } from '../io/system.ts';
+import { starAssumption } from './star-model.ts';
 
 export function describeDist(d: Dist, digits = 3): string {
   const f = (x: number) => Number(x.toPrecision(digits)).toString();
@@ -26,8 +27,8 @@ export function assumptionLines(s: SystemInput): string[] {
     lines.push('Pure reflection: thermal emission of the planet ignored (assumptions.thermal = "none").');
   } else {
     lines.push(`Thermal emission: blackbody planet with dayside and nightside temperatures of Cowan & Agol (2011), heat redistribution eps ${describeDist(a.redistribution)}.`);
-    lines.push('Star: blackbody at its effective temperature in the band-flux ratio.');
   }
+  if (a.thermal !== 'none' || s.star.spectrum || s.planet.massMjup || s.planet.massMearth) lines.push(starAssumption(s));
   lines.push(`Bond albedo A_B = q A_g with phase integral q ${describeDist(a.phaseIntegral)}; a band geometric albedo stands in for the bolometric one.`);
   lines.push('Lambert phase function; uniform prior on A_g over [0, 1/q] (energy conservation A_B <= 1).');
   lines.push(`Band "${s.band.id}" (${bandRangeNm(s.band)} nm${s.band.approximate ? ', approximate shape' : ''}), integrals weighted per ${a.weighting}.`);

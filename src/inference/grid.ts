@@ -86,7 +86,7 @@ export function runGrid(draws: Nuisance[], settings: ModelSettings, lik: Likelih
     const th = draws[i]!;
     const dm = drawModel(th, settings);
     models[i] = dm;
-    const mp = predictMassEffects(th, settings.band);
+    const mp = predictMassEffects(th, settings.band, settings.star?.beamingFactor);
     masses[i] = mp;
     let constant = 0;
     if (mp && lik.ellipsoidalAmplitudePpm) constant += lik.ellipsoidalAmplitudePpm.at(mp.ellipsoidalPpm);

@@ -16,6 +16,7 @@ import { type Nuisance, drawNuisance, withCorner } from './nuisance.ts';
 import { createRng, type Rng } from './random.ts';
 import { samplePosterior } from './sample-posterior.ts';
 import type { ModelSettings } from './signal-model.ts';
+import { starFactors } from './star-model.ts';
 import { quantileSorted, roundSig, summarize } from './summary.ts';
 import type { AlbedoPosterior, InferenceResult, MassEffects, PosteriorQuantiles, SensitivityRow } from './types.ts';
 import { posteriorWarnings } from './warnings.ts';
@@ -37,7 +38,8 @@ export const SENSITIVITY_CORNERS: ReadonlyArray<{ redistribution: number; phaseI
 ];
 
 function settingsOf(s: SystemInput): ModelSettings {
-  return { band: s.band, weighting: s.assumptions.weighting, thermal: s.assumptions.thermal !== 'none' };
+  const star = starFactors(s);
+  return { band: s.band, weighting: s.assumptions.weighting, thermal: s.assumptions.thermal !== 'none', ...(star ? { star } : {}) };
 }
 
 function allReflected(s: SystemInput, draws: Nuisance[], rng: Rng) {

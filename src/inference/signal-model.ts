@@ -23,6 +23,8 @@ export interface ModelSettings {
   band: Band;
   weighting: 'photon' | 'energy';
   thermal: boolean;
+  /** A tabulated stellar spectrum's factors on the blackbody star's band flux and beaming factor (absent: blackbody star). */
+  star?: { fluxFactor: number; beamingFactor: number };
 }
 
 /** The band-flux table of the settings, fetched once for the hot loop. */
@@ -69,7 +71,7 @@ export function drawModel(n: Nuisance, m: ModelSettings): DrawModel {
   const sinI = Math.sin(n.inclinationRad);
   const dayZeroK = daysideTemperatureK(n.teffK, n.scaledSemiMajorAxis, 0, n.redistribution);
   const nightZeroK = nightsideTemperatureK(n.teffK, n.scaledSemiMajorAxis, 0, n.redistribution);
-  const thermalScale = m.thermal ? (n.radiusRatio * n.radiusRatio) / bandFlux(m.band, n.teffK, m.weighting) : 0;
+  const thermalScale = m.thermal ? (n.radiusRatio * n.radiusRatio) / (bandFlux(m.band, n.teffK, m.weighting) * (m.star?.fluxFactor ?? 1)) : 0;
   return {
     lnDayZeroK: Math.log(dayZeroK),
     lnNightZeroK: Math.log(nightZeroK),
@@ -120,12 +122,13 @@ export function thermalRatio(dm: DrawModel, m: ModelSettings, tK: number): numbe
   return dm.thermalScale * bandFlux(m.band, tK, m.weighting);
 }
 
-export function predictMassEffects(n: Nuisance, band: Band): MassPrediction | undefined {
+/** `beamingFactor` multiplies the blackbody beaming factor (a tabulated stellar spectrum's correction; 1 for a blackbody). */
+export function predictMassEffects(n: Nuisance, band: Band, beamingFactor = 1): MassPrediction | undefined {
   if (n.planetMassKg === undefined || n.starMassKg === undefined || n.periodS === undefined) return undefined;
   const k = rvSemiAmplitudeMs(n.periodS, n.planetMassKg, n.starMassKg, n.inclinationRad);
   return {
     rvSemiAmplitudeMs: k,
-    beamingPpm: beamingAmplitude(n.teffK, band, k) * 1e6,
+    beamingPpm: beamingAmplitude(n.teffK, band, k) * beamingFactor * 1e6,
     ellipsoidalPpm: ellipsoidalAmplitude(n.planetMassKg, n.starMassKg, n.scaledSemiMajorAxis, n.inclinationRad, n.limbDarkeningU, n.gravityDarkeningG) * 1e6,
   };
 }

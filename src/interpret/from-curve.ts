@@ -10,6 +10,7 @@ import type { SystemInput } from '../io/system.ts';
 import { drawNuisance } from '../inference/nuisance.ts';
 import { createRng } from '../inference/random.ts';
 import { predictMassEffects } from '../inference/signal-model.ts';
+import { starFactors } from '../inference/star-model.ts';
 import type { Decomposition } from '../lightcurve/decompose.ts';
 import type { EclipseGeometry, ValueSigma } from '../lightcurve/types.ts';
 
@@ -46,7 +47,8 @@ export function predictFromSystem(system: SystemInput, seed = system.assumptions
   };
   const periods = draws.map((d) => d.periodS).filter((p): p is number => p !== undefined);
   const out: SystemPrediction = { geometry, periodDays: periods.length > 0 ? median(periods) / 86400 : undefined };
-  const masses = draws.map((d) => predictMassEffects(d, system.band)).filter((m) => m !== undefined);
+  const beaming = starFactors(system, system.band, 'photon')?.beamingFactor;
+  const masses = draws.map((d) => predictMassEffects(d, system.band, beaming)).filter((m) => m !== undefined);
   if (masses.length > 0) {
     out.ellipsoidalPpm = meanSigma(masses.map((m) => m.ellipsoidalPpm));
     out.beamingPpm = meanSigma(masses.map((m) => m.beamingPpm));

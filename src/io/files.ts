@@ -17,6 +17,17 @@ export function resolveInputPath(baseDir: string, file: string): string {
 
 /** Reads a regular file as UTF-8 text, or throws file-unreadable naming `fieldPath`. */
 export function readInputText(fieldPath: string, baseDir: string, file: string): string {
+  return readInputFile(fieldPath, baseDir, file, 'utf8');
+}
+
+/** Reads a regular file as bytes (same checks and size limit as readInputText). */
+export function readInputBytes(fieldPath: string, baseDir: string, file: string): Uint8Array {
+  return readInputFile(fieldPath, baseDir, file, null);
+}
+
+function readInputFile(fieldPath: string, baseDir: string, file: string, encoding: 'utf8'): string;
+function readInputFile(fieldPath: string, baseDir: string, file: string, encoding: null): Uint8Array;
+function readInputFile(fieldPath: string, baseDir: string, file: string, encoding: 'utf8' | null): string | Uint8Array {
   const full = resolveInputPath(baseDir, file);
   let size: number;
   try {
@@ -31,7 +42,7 @@ export function readInputText(fieldPath: string, baseDir: string, file: string):
     throw inputError('file-unreadable', fieldPath, `"${file}" is ${size} bytes, larger than the ${MAX_INPUT_FILE_BYTES}-byte limit`, file);
   }
   try {
-    return readFileSync(full, 'utf8');
+    return encoding ? readFileSync(full, encoding) : readFileSync(full);
   } catch (e) {
     throw inputError('file-unreadable', fieldPath, `cannot read "${file}": ${(e as NodeJS.ErrnoException).code ?? 'error'}`, file);
   }

@@ -20,12 +20,24 @@ export const bandSchema = z.union(
   { error: 'must be a band name, {tophatNm: [min, max]}, {responseFile} or {response: [[nm, weight], ...]}' },
 );
 
+export const starSpectrumSchema = z.union(
+  [
+    z.object({ file: z.string().min(1).max(1024) }).strict()
+      .describe('A CSV stellar spectrum (wavelength_nm,flux or wavelength_um,flux; any flux-density unit, only the shape matters), relative to the system file (CLI only).'),
+    z.object({ table: z.array(z.tuple([z.number(), z.number()])).min(1).max(200_000), unit: z.enum(['nm', 'um']).default('nm') }).strict()
+      .describe('An inline stellar spectrum: [[wavelength, flux], ...] (any flux-density unit).'),
+  ],
+  { error: 'must be {file: "spectrum.csv"} or {table: [[nm, flux], ...]}' },
+);
+
 export const starSchema = z
   .object({
     teffK: parameterQuantity.describe('Stellar effective temperature [K].'),
     radiusRsun: opt(parameterQuantity, 'Stellar radius [Rsun]; needed with radiusRjup/radiusRearth or semiMajorAxisAu.'),
     massMsun: opt(parameterQuantity, 'Stellar mass [Msun]; needed with periodDays and for mass effects.'),
     metallicity: z.number().min(-2).max(2).default(0).describe('[M/H] in dex, for condensation curves.'),
+    spectrum: starSpectrumSchema.optional()
+      .describe("The star's spectrum in place of a blackbody in the band integrals (the thermal depth's star flux and the beaming factor)."),
   })
   .strict();
 

@@ -7,6 +7,8 @@
  */
 import { HesperError, type Issue } from '../errors.ts';
 import { type Band, type BandSpec, parseResponseCsv, resolveBand } from '../physics/bandpass.ts';
+import type { StellarSpectrum } from '../physics/star-spectrum.ts';
+import { readStarSpectrum } from './star-spectrum.ts';
 import { type Dist, type FieldSpec, type SamplesReader, toDist } from './distribution.ts';
 import { ASSUMPTION_FIELDS, MEASUREMENT_FIELDS, PLANET_FIELDS, STAR_FIELDS } from './system-fields.ts';
 import { type SystemFile, systemFileSchema } from './system-schema.ts';
@@ -18,7 +20,7 @@ type Fields<T extends Record<string, FieldSpec>> = { [K in keyof T]?: Dist };
 export interface SystemInput {
   name: string;
   band: Band;
-  star: Fields<typeof STAR_FIELDS> & { teffK: Dist; metallicityDex: number };
+  star: Fields<typeof STAR_FIELDS> & { teffK: Dist; metallicityDex: number; spectrum?: StellarSpectrum };
   planet: Fields<typeof PLANET_FIELDS> & { transitEpochBjd?: number };
   measurements: Omit<Fields<typeof MEASUREMENT_FIELDS>, 'phaseSemiAmplitudePpm'> & {
     /** Correlation of the depth and phase-amplitude errors (both Gaussian), when given. */
@@ -140,11 +142,12 @@ export function parseSystem(json: unknown, opts: ParseOptions = {}): SystemInput
       measurements.depthAmplitudeCorrelation = rho;
     }
   }
+  const spectrum = f.star.spectrum && band ? readStarSpectrum(f.star.spectrum, band, issues, opts.readText) : undefined;
   if (issues.length === 0 && band && star.teffK && a.redistribution && a.phaseIntegral && a.limbDarkening && a.gravityDarkening) {
     const system: SystemInput = {
       name: f.name,
       band,
-      star: { ...star, teffK: star.teffK, metallicityDex: f.star.metallicity },
+      star: { ...star, teffK: star.teffK, metallicityDex: f.star.metallicity, ...(spectrum ? { spectrum } : {}) },
       planet: f.planet.transitEpochBjd !== undefined ? { ...planet, transitEpochBjd: f.planet.transitEpochBjd } : planet,
       measurements,
       assumptions: {

@@ -4,20 +4,39 @@
  * the model is linear, the binned model is then exactly the weighted mean of the
  * point models: binning loses resolution but introduces no bias, even across the
  * eclipse ingress where the shape changes within a bin. Empty bins are dropped.
+ *
+ * With `groups`, the bins are formed within each group (a baseline segment, or a
+ * segment and an orbital cycle when trends are fitted): averaging points of different
+ * segments into one bin would make their normalisations indistinguishable, and
+ * averaging over a whole segment would erase the time information a trend needs.
  */
 import { inputError, requireInRange } from '../errors.ts';
 import type { Design } from './design-matrix.ts';
 
-export function binDesign(design: Design, bins: number): Design {
+export function binDesign(design: Design, bins: number, groups?: Int32Array): Design {
   requireInRange('bins', bins, { min: 2 });
   if (!Number.isInteger(bins)) throw inputError('out-of-range', 'bins', `bins = ${bins}: must be a whole number`, bins, 'integers >= 2');
   const { cols } = design;
-  const wSum = new Float64Array(bins);
-  const colSum = new Float64Array(bins * cols);
-  const fluxSum = new Float64Array(bins);
-  const phaseSum = new Float64Array(bins);
+  // Cell key of each row: group x bins + phase bin; the keys in use are numbered in
+  // increasing order (group, then phase), so the binned rows are sorted like the bins.
+  const keyOf = new Float64Array(design.rows);
   for (let r = 0; r < design.rows; r++) {
-    const b = Math.min(bins - 1, Math.floor(design.phase[r]! * bins));
+    const pb = Math.min(bins - 1, Math.floor(design.phase[r]! * bins));
+    keyOf[r] = (groups ? groups[r]! * bins : 0) + pb;
+  }
+  const keys = Float64Array.from(new Set(keyOf)).sort();
+  const index = new Map<number, number>();
+  keys.forEach((k, c) => index.set(k, c));
+  const cellOf = new Int32Array(design.rows);
+  for (let r = 0; r < design.rows; r++) cellOf[r] = index.get(keyOf[r]!)!;
+  const rank = Int32Array.from(keys, (_, c) => c);
+  const nCells = keys.length;
+  const wSum = new Float64Array(nCells);
+  const colSum = new Float64Array(nCells * cols);
+  const fluxSum = new Float64Array(nCells);
+  const phaseSum = new Float64Array(nCells);
+  for (let r = 0; r < design.rows; r++) {
+    const b = rank[cellOf[r]!]!;
     const e = design.fluxErr[r]!;
     const w = 1 / (e * e);
     wSum[b] = wSum[b]! + w;
@@ -28,7 +47,7 @@ export function binDesign(design: Design, bins: number): Design {
     for (let j = 0; j < cols; j++) colSum[ob + j] = colSum[ob + j]! + w * design.matrix[o + j]!;
   }
   let used = 0;
-  for (let b = 0; b < bins; b++) if (wSum[b]! > 0) used++;
+  for (let b = 0; b < nCells; b++) if (wSum[b]! > 0) used++;
   const matrix = new Float64Array(used * cols);
   const phase = new Float64Array(used);
   const flux = new Float64Array(used);
@@ -36,7 +55,7 @@ export function binDesign(design: Design, bins: number): Design {
   const eclipseCol = design.names.indexOf('eclipse');
   let inEclipse = 0;
   let r = 0;
-  for (let b = 0; b < bins; b++) {
+  for (let b = 0; b < nCells; b++) {
     const w = wSum[b]!;
     if (!(w > 0)) continue;
     for (let j = 0; j < cols; j++) matrix[r * cols + j] = colSum[b * cols + j]! / w;

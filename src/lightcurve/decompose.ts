@@ -26,6 +26,7 @@ import { weightedLeastSquares } from './least-squares.ts';
 import { resolveGeometry, transitKeepMask } from './masks.ts';
 import { checkMassEffects, type MassCheck } from './mass-check.ts';
 import { phaseTermShape } from './phase-term.ts';
+import { DEFAULT_GAP_DAYS, DEFAULT_TREND_ORDER, binGroups, checkBaselineOptions, planBaseline, segmentCurve } from './segments.ts';
 import type { ColumnName, EclipseGeometry, LightCurve, PhaseModel, SineAttribution, ValueSigma } from './types.ts';
 
 export interface DecomposeOptions {
@@ -46,6 +47,24 @@ export interface DecomposeOptions {
   predicted?: { ellipsoidalPpm?: ValueSigma; beamingPpm?: ValueSigma };
   /** Multiply the covariance by the reduced chi-square when it exceeds 1. */
   scaleErrors?: boolean;
+  /** Order of each segment's polynomial trend in time (default 1; 0 = normalisation only). */
+  trendOrder?: number;
+  /** A gap longer than this [days] starts a new segment (default 0.5). */
+  gapDays?: number;
+}
+
+/** One baseline segment of the fit: a file, or a stretch of it between long gaps. */
+export interface SegmentResult {
+  file: string;
+  /** First and last time [days, the curve's time system]; null for a folded curve. */
+  start: number | null;
+  end: number | null;
+  /** Points of the segment used in the fit (after the transit mask). */
+  points: number;
+  /** Order of its polynomial trend (0: normalisation only; -1: no point left to fit). */
+  trendOrder: number;
+  /** Its fitted normalisation (the constant, in units of the flux column) with sigma; null when not fitted. */
+  normalisation: ValueSigma | null;
 }
 
 export interface BrightnessMapResult extends LongitudinalMap {
@@ -70,6 +89,10 @@ export interface Decomposition {
   residualPpm: number;
   /** Light-curve points used in the fit (after the transit mask). */
   points: number;
+  /** The baseline segments, each with its own normalisation and trend, fitted with the signals. */
+  segments: SegmentResult[];
+  /** Number of trend coefficients in the fit (normalisations not counted). */
+  trendTerms: number;
   brightnessMap: BrightnessMapResult;
   massCheck: MassCheck[];
   model: {
@@ -79,6 +102,9 @@ export interface Decomposition {
     eclipseShape: 'two-disk overlap' | 'box' | 'none';
     inclinationDeg: number;
     errorsScaled: boolean;
+    /** Requested trend order and the gap that splits segments [days]. */
+    trendOrder: number;
+    gapDays: number;
   };
   /** The linear coefficients (flux units) and their covariance, as fitted. */
   linearFit: { names: ColumnName[]; values: number[]; covariance: number[][] };
@@ -101,13 +127,20 @@ export function decompose(curve: LightCurve, options: DecomposeOptions): Decompo
   const fitOffset = options.fitOffset ?? false;
   checkValueSigma('predicted.beamingPpm', options.predicted?.beamingPpm);
   checkValueSigma('predicted.ellipsoidalPpm', options.predicted?.ellipsoidalPpm);
+  const trendOrder = options.trendOrder ?? DEFAULT_TREND_ORDER;
+  const gapDays = options.gapDays ?? DEFAULT_GAP_DAYS;
+  checkBaselineOptions(trendOrder, gapDays);
   const geometry = resolveGeometry(options.geometry, options.periodDays);
   const folded = foldCurve(curve, options.periodDays, options.epochDays);
   const keep = transitKeepMask(folded.phase, geometry);
   const shape = phaseTermShape(phaseModel, geometry.inclinationRad);
-  let design = buildDesign({ ...folded, keep }, shape, geometry);
+  const segmentation = segmentCurve(curve, gapDays);
+  const plan = planBaseline(curve, segmentation, keep, trendOrder);
+  let design = buildDesign({ ...folded, keep, baseline: { plan, segmentOf: segmentation.segmentOf, time: curve.x } }, shape, geometry);
   const points = design.rows;
-  if (options.bins !== undefined) design = binDesign(design, options.bins);
+  if (options.bins !== undefined) {
+    design = binDesign(design, options.bins, binGroups(curve, segmentation, plan, keep, options.periodDays, options.epochDays));
+  }
   const fit = weightedLeastSquares(design.matrix, design.rows, design.cols, design.flux, design.fluxErr, design.names);
   const reducedChiSquare = fit.chiSquare / fit.dof;
   const errorsScaled = (options.scaleErrors ?? false) && reducedChiSquare > 1;
@@ -150,6 +183,16 @@ export function decompose(curve: LightCurve, options: DecomposeOptions): Decompo
     offsetFitted: fitOffset,
   });
 
+  const segments: SegmentResult[] = segmentation.segments.map((seg, k) => {
+    const p = plan.segments[k]!;
+    const c = p.firstColumn;
+    return {
+      file: seg.file, start: seg.start, end: seg.end, points: p.fittedPoints, trendOrder: p.order,
+      normalisation: c < 0 ? null : { value: fit.coefficients[c]!, sigma: Math.sqrt(fit.covariance[c * design.cols + c]!) },
+    };
+  });
+  const trendTerms = plan.segments.reduce((n, p) => n + Math.max(p.order, 0), 0);
+
   let sumSq = 0;
   for (let r = 0; r < fit.residuals.length; r++) sumSq += fit.residuals[r]! ** 2;
   const inclinationDeg = (geometry.inclinationRad * 180) / Math.PI;
@@ -166,9 +209,11 @@ export function decompose(curve: LightCurve, options: DecomposeOptions): Decompo
     degreesOfFreedom: fit.dof,
     residualPpm: Math.sqrt(sumSq / fit.residuals.length) * 1e6,
     points,
+    segments,
+    trendTerms,
     brightnessMap: { ...map, longitudeFitted: fitOffset, meanPlanetFluxPpm: q.meanPlanetFluxPpm ? vs(q.meanPlanetFluxPpm, pv) : null },
     massCheck: mass.checks,
-    model: { phaseModel, offsetFitted: fitOffset, sineTerm, eclipseShape, inclinationDeg, errorsScaled },
+    model: { phaseModel, offsetFitted: fitOffset, sineTerm, eclipseShape, inclinationDeg, errorsScaled, trendOrder, gapDays },
     linearFit: {
       names: design.names,
       values: Array.from(fit.coefficients),
@@ -184,7 +229,7 @@ export function decompose(curve: LightCurve, options: DecomposeOptions): Decompo
     notes: [],
     warnings: [...mass.warnings],
   };
-  addDiagnostics(result, geometry.kind === 'window' && !geometry.inclinationGiven, fit.coefficients[0]!);
+  addDiagnostics(result, geometry.kind === 'window' && !geometry.inclinationGiven, curve.column === 'time', options.periodDays);
   return result;
 }
 

@@ -20,9 +20,14 @@
  * the phase term running and removes D h(phi), so the planet's small change over the
  * eclipse is neglected (it is second order in the eclipse half-width).
  * The eclipse column is left out when the geometry gives no eclipse.
+ *
+ * With baseline segments (segments.ts) the single constant is replaced by each
+ * segment's constant and Legendre trend terms, placed first; a point's row is zero in
+ * the columns of the other segments.
  */
 import type { ResolvedGeometry } from './masks.ts';
 import type { PhaseTermShape } from './phase-term.ts';
+import { legendre, type BaselinePlan } from './segments.ts';
 import type { ColumnName } from './types.ts';
 
 /** Row-major design matrix with its data, for the points kept by the mask. */
@@ -45,10 +50,15 @@ export interface DesignInput {
   fluxErr: Float64Array;
   /** 1 = use the point. */
   keep: Uint8Array;
+  /** Baseline segments; absent = one constant. */
+  baseline?: { plan: BaselinePlan; segmentOf: Int32Array; time: Float64Array };
 }
 
 export function buildDesign(input: DesignInput, shape: PhaseTermShape, geometry: ResolvedGeometry): Design {
-  const names: ColumnName[] = ['constant', 'phaseTerm', 'sine', 'ellipsoidal'];
+  const base = input.baseline;
+  const names: ColumnName[] = base ? [...base.plan.names] : ['constant'];
+  const b = names.length;
+  names.push('phaseTerm', 'sine', 'ellipsoidal');
   const withEclipse = geometry.contactHalfWidth > 0;
   if (withEclipse) names.push('eclipse');
   const cols = names.length;
@@ -58,6 +68,7 @@ export function buildDesign(input: DesignInput, shape: PhaseTermShape, geometry:
   const phase = new Float64Array(rows);
   const flux = new Float64Array(rows);
   const fluxErr = new Float64Array(rows);
+  const poly = new Float64Array(8);
   let r = 0;
   let inEclipse = 0;
   for (let i = 0; i < input.keep.length; i++) {
@@ -65,14 +76,24 @@ export function buildDesign(input: DesignInput, shape: PhaseTermShape, geometry:
     const p = input.phase[i]!;
     const o = r * cols;
     const theta = 2 * Math.PI * p;
-    matrix[o] = 1;
-    matrix[o + 1] = shape.value(p);
-    matrix[o + 2] = Math.sin(theta);
-    matrix[o + 3] = -Math.cos(2 * theta);
+    if (base) {
+      const seg = base.plan.segments[base.segmentOf[i]!]!;
+      matrix[o + seg.firstColumn] = 1;
+      if (seg.order === 1) matrix[o + seg.firstColumn + 1] = (base.time[i]! - seg.midTime) / seg.halfSpan;
+      else if (seg.order > 1) {
+        legendre((base.time[i]! - seg.midTime) / seg.halfSpan, seg.order, poly);
+        for (let k = 0; k < seg.order; k++) matrix[o + seg.firstColumn + 1 + k] = poly[k]!;
+      }
+    } else {
+      matrix[o] = 1;
+    }
+    matrix[o + b] = shape.value(p);
+    matrix[o + b + 1] = Math.sin(theta);
+    matrix[o + b + 2] = -Math.cos(2 * theta);
     if (withEclipse) {
       const h = geometry.hiddenFraction(p);
       if (h > 0) inEclipse++;
-      matrix[o + 4] = -h;
+      matrix[o + b + 3] = -h;
     }
     phase[r] = p;
     flux[r] = input.flux[i]!;

@@ -17,6 +17,13 @@ export interface LightCurve {
   x: Float64Array;
   flux: Float64Array;
   fluxErr: Float64Array;
+  /**
+   * Which input file each point came from (an index into `files`), when the curve was
+   * read from several; absent means one file. Each file gets its own baseline segments.
+   */
+  fileIndex?: Int32Array;
+  /** Labels of the input files (e.g. their names), in the order of `fileIndex`. */
+  files?: string[];
 }
 
 /** A folded curve: phase in [0, 1). */
@@ -40,8 +47,14 @@ export type EclipseGeometry =
 /** The planet's phase term: a first-harmonic cosine or the Lambert-sphere phase function. */
 export type PhaseModel = 'cosine' | 'lambert';
 
-/** Names of the columns of the linear model, in the order they appear. */
-export type ColumnName = 'constant' | 'phaseTerm' | 'sine' | 'ellipsoidal' | 'eclipse';
+/**
+ * Names of the columns of the linear model. The baseline columns come first: with one
+ * segment `constant` and `trend1`, `trend2`, ...; with several `segment2.constant`,
+ * `segment2.trend1`, ... (segments numbered from 1). Then the signal columns.
+ */
+export type BaselineColumn = 'constant' | `trend${number}` | `segment${number}.constant` | `segment${number}.trend${number}`;
+export type SignalColumn = 'phaseTerm' | 'sine' | 'ellipsoidal' | 'eclipse';
+export type ColumnName = BaselineColumn | SignalColumn;
 
 /**
  * What the sin(2 pi phi) coefficient was taken to be. It is one function shared by the

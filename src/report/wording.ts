@@ -159,7 +159,10 @@ function cautionSentences(w: Writer): string {
   const met = w.s.star.metallicityDex;
   const mh = `${met > 0 ? '+' : ''}${met}`;
   const thermal = w.s.assumptions.thermal === 'none' ? 'thermal emission is neglected' : 'the thermal emission follows a two-hemisphere model';
-  return `These numbers depend on the model: the star radiates as a blackbody at its effective temperature, the planet scatters as a Lambert sphere, ${thermal}, and the Bond albedo assumes that the band geometric albedo holds at all wavelengths (${m.math(`${AB} = q\\,${AG}`)}). The condensation curves are evaluated between ${m.math('10^{-3}')} and 1 bar with the planet's metallicity taken equal to the star's (${m.math(`[\\mathrm{M/H}] = ${mh}`)}), and catalog values were converted to geometric albedos (Bond and spherical albedos divided by ${m.math('q')}, surface reflectances as Lambert spheres, single-scattering albedos through the isotropic semi-infinite relation).`;
+  const star = w.s.star.spectrum
+    ? `the star's band flux comes from the tabulated spectrum given (${w.t(w.s.star.spectrum.source)}), scaled to a blackbody's energy at its effective temperature`
+    : 'the star radiates as a blackbody at its effective temperature';
+  return `These numbers depend on the model: ${star}, the planet scatters as a Lambert sphere, ${thermal}, and the Bond albedo assumes that the band geometric albedo holds at all wavelengths (${m.math(`${AB} = q\\,${AG}`)}). The condensation curves are evaluated between ${m.math('10^{-3}')} and 1 bar with the planet's metallicity taken equal to the star's (${m.math(`[\\mathrm{M/H}] = ${mh}`)}), and catalog values were converted to geometric albedos (Bond and spherical albedos divided by ${m.math('q')}, surface reflectances as Lambert spheres, single-scattering albedos through the isotropic semi-infinite relation).`;
 }
 
 /** The paragraphs of the write-up in the given markup, and the citations they used. */

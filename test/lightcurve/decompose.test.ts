@@ -197,7 +197,9 @@ describe('decompose: folding and binning', () => {
   it('a time series and its pre-folded version give the same fit', () => {
     const s = spec({ planetFlux: cosinePlanet(MEAN * PPM, SEMI * PPM, 10), seed: 8 });
     const curve = syntheticTimeSeries(s);
-    const opts = options(s, { fitOffset: true, predicted: { beamingPpm: { value: 10, sigma: 0.5 } } });
+    // A folded curve has no times, so its baseline is one constant: compare with the
+    // time series fitted with no trend (trend order 0).
+    const opts = options(s, { fitOffset: true, predicted: { beamingPpm: { value: 10, sigma: 0.5 } }, trendOrder: 0 });
     const a = decompose(curve, opts);
     const folded = parseCurveCsv(toPhaseCsv(curve, s.epochDays, s.periodDays), 'folded.csv');
     expect(folded.column).toBe('phase');
@@ -217,7 +219,11 @@ describe('decompose: folding and binning', () => {
     const curve = syntheticTimeSeries(s);
     const a = decompose(curve, options(s));
     const b = decompose(curve, options(s, { bins: 400 }));
-    expect(b.data.bins).toBeLessThanOrEqual(400);
+    // With a trend the bins are formed per orbital cycle (4 cycles touched by the
+    // 4.5-day span of a 1.5-day orbit starting 0.3 periods before the epoch, derived).
+    expect(b.data.bins).toBeLessThanOrEqual(4 * 400);
+    expect(b.data.bins).toBeGreaterThan(400);
+    expect(decompose(curve, options(s, { bins: 400, trendOrder: 0 })).data.bins).toBeLessThanOrEqual(400);
     expect(b.points).toBe(a.points);
     const keys = ['eclipseDepthPpm', 'phaseAmplitudePpm', 'ellipsoidalAmplitudePpm', 'beamingAmplitudePpm'] as const;
     for (const k of keys) {

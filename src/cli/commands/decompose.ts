@@ -1,6 +1,6 @@
 /**
- * `hesper decompose CURVE.csv --period DAYS --epoch BJD`: fold a light curve, mask the
- * transit and separate the planet's phase term and eclipse from the star's ellipsoidal
+ * `hesper decompose CURVE... --period DAYS --epoch BJD`: read one or several light-curve
+ * files (CSV or FITS binary tables), fold them, mask the transit and separate the planet's phase term and eclipse from the star's ellipsoidal
  * and beaming signals (src/lightcurve/decompose.ts). Readable report by default, the
  * decomposition JSON with --json, and --system-out writes the
  * measurement block of a system file.
@@ -10,10 +10,12 @@ import path from 'node:path';
 import type { Command } from 'commander';
 import { Option } from 'commander';
 import { inputError } from '../../errors.ts';
-import { readCurveCsv } from '../../io/curve-csv.ts';
+import { ALL_QUALITY_BITS, DEFAULT_FLUX_COLUMNS, type CurveFileSummary } from '../../io/curve-fits.ts';
+import { readLightCurveFiles, type CurveColumnOptions } from '../../io/curve-files.ts';
 import { decompose, type Decomposition } from '../../lightcurve/decompose.ts';
+import { DEFAULT_GAP_DAYS, DEFAULT_TREND_ORDER, MAX_TREND_ORDER } from '../../lightcurve/segments.ts';
 import { loadSystemFile } from '../../io/system-file.ts';
-import { type CurveOptions, decomposeWithSystem } from '../curve-route.ts';
+import { type CurveOptions, type FileDecomposition, decomposeWithSystem } from '../curve-route.ts';
 import type { EclipseGeometry, PhaseModel, ValueSigma } from '../../lightcurve/types.ts';
 import type { CliIo } from '../io.ts';
 import { intOption, numberOption } from '../options.ts';
@@ -34,9 +36,17 @@ interface DecomposeCliOptions {
   scaleErrors?: boolean;
   systemOut?: string;
   json?: boolean;
+  trendOrder: number;
+  gap: number;
+  extension?: string;
+  timeColumn?: string;
+  fluxColumn?: string;
+  fluxErrorColumn?: string;
+  qualityColumn?: string;
+  qualityMask?: number;
 }
 
-const HELP_AFTER = `
+const HELP_AFTER = () => `
 Model (flux normalised to the star, phase 0 at mid-transit, 0.5 at mid-eclipse):
   F = c0 + Ap L(phi) + S sin(2 pi phi) - E cos(4 pi phi) - D h(phi)
   Ap  planet's phase term, peak-to-trough (L: -cos(2 pi phi)/2, or the Lambert
@@ -44,7 +54,9 @@ Model (flux normalised to the star, phase 0 at mid-transit, 0.5 at mid-eclipse):
   S   sine term: Doppler beaming and/or the planet's phase offset
   E   ellipsoidal semi-amplitude;  D  eclipse depth, h the hidden fraction of the
       planet (two uniform disks, or a box of the given duration)
-  The transit is masked.
+  The transit is masked. Each file, and each stretch of a file between gaps longer
+  than --gap, is a segment with its own normalisation and a polynomial trend in time
+  (Legendre terms up to --trend-order), fitted jointly with the signals above.
 
 The sine term is one function for two signals: the star's beaming and the planet's
 first-harmonic sine (its phase offset). Without --offset it is reported as beaming
@@ -52,6 +64,12 @@ and the planet's peak is held at eclipse. With --offset it is the planet's offse
 the beaming is fixed at --predicted-beaming if given (its sigma is carried into the
 offset), otherwise the beaming term is absent and any real beaming shows up as an
 eastward offset. The output says which was done.
+
+Files: CSV (time,flux,flux_err or phase,flux,flux_err) or FITS binary tables as the
+missions distribute them. FITS defaults: time TIME, as BJD = TIME + BJDREFI + BJDREFF
+(or + BJDREF) from the header; flux ${DEFAULT_FLUX_COLUMNS.join(', else ')}; its error
+the same name + _ERR; points with QUALITY & --quality-mask != 0 masked (every bit by
+default); NaN rows dropped and counted; the flux divided by its median per file.
 
 Geometry: --radius-ratio, --scaled-semi-major-axis and --inclination together, or
 --duration (first to fourth contact) alone (--inclination may be added for the
@@ -89,7 +107,7 @@ export function registerDecompose(program: Command, io: CliIo): void {
   program
     .command('decompose')
     .description("fold a light curve and separate the planet's phase term and eclipse from the star's ellipsoidal and beaming signals")
-    .argument('<curve>', 'CSV with a header time,flux,flux_err (days) or phase,flux,flux_err (folded); # lines are comments')
+    .argument('<curves...>', 'light-curve files, one per sector or quarter: CSV with a header time,flux,flux_err (days) or phase,flux,flux_err (folded), or FITS binary tables')
     .option('--period <days>', 'orbital period [days] (default with --system: planet.periodDays)', numberOption('period'))
     .option('--system <file>', 'system file: geometry, period and the predicted ellipsoidal and beaming signals come from it')
     .option('--epoch <bjd>', 'mid-transit time [days, same system as the time column]; not needed for a folded curve', numberOption('epoch'))
@@ -97,17 +115,26 @@ export function registerDecompose(program: Command, io: CliIo): void {
     .option('--scaled-semi-major-axis <a>', 'a/R*', numberOption('scaled-semi-major-axis'))
     .option('--inclination <deg>', 'orbital inclination [deg]', numberOption('inclination'))
     .option('--duration <hours>', 'total transit/eclipse duration [hours], instead of the disk geometry', numberOption('duration'))
-    .option('--bins <n>', 'fit the curve binned into N equal phase bins', intOption('bins', 10, 1_000_000))
+    .option('--bins <n>', 'fit the curve binned into N equal phase bins (per segment, and per orbital cycle when a trend is fitted)', intOption('bins', 10, 1_000_000))
     .addOption(new Option('--phase-model <model>', "planet's phase term").choices(['cosine', 'lambert']).default('cosine'))
     .option('--offset', "fit the planet's phase offset (first-harmonic sine); see the beaming note below")
     .option('--predicted-beaming <ppm[,sigma]>', 'beaming predicted from the masses: fixes the beaming with --offset, else checked against the fit', valueSigmaOption('predicted-beaming'))
     .option('--predicted-ellipsoidal <ppm[,sigma]>', 'ellipsoidal amplitude predicted from the masses, checked against the fit', valueSigmaOption('predicted-ellipsoidal'))
     .option('--scale-errors', 'multiply the uncertainties by sqrt(reduced chi-square) when it exceeds 1')
+    .option('--trend-order <n>', `order of each segment's polynomial trend in time (0 = normalisation only)`, intOption('trend-order', 0, MAX_TREND_ORDER), DEFAULT_TREND_ORDER)
+    .option('--gap <days>', 'a gap longer than this starts a new segment [days]', numberOption('gap', 0), DEFAULT_GAP_DAYS)
+    .option('--extension <name|n>', 'FITS: the extension holding the table (EXTNAME or number; default the first binary table with the time column)')
+    .option('--time-column <name>', 'FITS: time column (default TIME)')
+    .option('--flux-column <name>', `FITS: flux column (default ${DEFAULT_FLUX_COLUMNS.join(', else ')})`)
+    .option('--flux-error-column <name>', 'FITS: flux-error column (default: the flux column + _ERR)')
+    .option('--quality-column <name|none>', 'FITS: quality-flag column (default QUALITY when present; none = no masking)')
+    .option('--quality-mask <bits>', 'FITS: a point is masked when QUALITY & BITS != 0 (decimal or 0x hex; default every bit; 0 = none)', qualityMaskOption)
     .option('--system-out <file>', 'write the measurement block of a system file (JSON) to FILE')
     .option('--json', 'print the decomposition JSON instead of the readable report')
-    .addHelpText('after', HELP_AFTER)
-    .action((file: string, opts: DecomposeCliOptions) => {
-      const result = opts.system ? fromSystem(file, opts, io) : fromOptions(file, opts, io);
+    .addHelpText('after', HELP_AFTER())
+    .action((files: string[], opts: DecomposeCliOptions) => {
+      if (!(opts.gap > 0)) throw inputError('out-of-range', '--gap', `--gap ${opts.gap}: must be > 0 days`, opts.gap, '(0, inf)');
+      const result = opts.system ? fromSystem(files, opts, io) : fromOptions(files, opts, io);
       if (opts.systemOut) {
         const target = path.resolve(io.cwd, opts.systemOut);
         try {
@@ -117,11 +144,31 @@ export function registerDecompose(program: Command, io: CliIo): void {
         }
         io.err(`wrote the measurement block to ${opts.systemOut}`);
       }
-      io.out(opts.json ? JSON.stringify(result, null, 2) : textReport(file, result));
+      io.out(opts.json ? JSON.stringify(result, null, 2) : textReport(files.join(', '), result));
     });
 }
 
-function fromSystem(file: string, opts: DecomposeCliOptions, io: CliIo): Decomposition {
+/** "255", "0x3ff" or "all": the quality bits that mask a point. */
+function qualityMaskOption(text: string): number {
+  const t = text.trim().toLowerCase();
+  if (t === 'all') return ALL_QUALITY_BITS;
+  const n = /^0x[0-9a-f]+$/.test(t) ? Number.parseInt(t.slice(2), 16) : /^\d+$/.test(t) ? Number(t) : NaN;
+  if (!Number.isSafeInteger(n)) throw inputError('invalid-input', '--quality-mask', `--quality-mask ${text}: give the bits as a whole number (decimal or 0x hex, e.g. 0x1bf), or all`, text);
+  return n;
+}
+
+function columnOptions(o: DecomposeCliOptions): CurveColumnOptions {
+  const c: CurveColumnOptions = {};
+  if (o.extension !== undefined) c.extension = /^\d+$/.test(o.extension.trim()) ? Number(o.extension) : o.extension;
+  if (o.timeColumn !== undefined) c.timeColumn = o.timeColumn;
+  if (o.fluxColumn !== undefined) c.fluxColumn = o.fluxColumn;
+  if (o.fluxErrorColumn !== undefined) c.fluxErrColumn = o.fluxErrorColumn;
+  if (o.qualityColumn !== undefined) c.qualityColumn = o.qualityColumn.trim().toLowerCase() === 'none' ? null : o.qualityColumn;
+  if (o.qualityMask !== undefined) c.qualityMask = o.qualityMask;
+  return c;
+}
+
+function fromSystem(file: string[], opts: DecomposeCliOptions, io: CliIo): FileDecomposition {
   for (const [flag, v] of [['--radius-ratio', opts.radiusRatio], ['--scaled-semi-major-axis', opts.scaledSemiMajorAxis], ['--inclination', opts.inclination], ['--duration', opts.duration]] as const) {
     if (v !== undefined) throw inputError('invalid-input', flag, `${flag} and --system both give the geometry: use one`);
   }
@@ -129,19 +176,21 @@ function fromSystem(file: string, opts: DecomposeCliOptions, io: CliIo): Decompo
     throw inputError('invalid-input', '--system', 'with --system the predicted signals come from the system masses; drop --predicted-beaming / --predicted-ellipsoidal');
   }
   const system = loadSystemFile(opts.system!, io.cwd);
-  const curveOptions: CurveOptions = { phaseModel: opts.phaseModel, offset: opts.offset ?? false };
+  const curveOptions: CurveOptions = {
+    phaseModel: opts.phaseModel, offset: opts.offset ?? false, columns: columnOptions(opts), trendOrder: opts.trendOrder, gapDays: opts.gap,
+  };
   if (opts.period !== undefined) curveOptions.period = opts.period;
   if (opts.epoch !== undefined) curveOptions.epoch = opts.epoch;
   if (opts.bins !== undefined) curveOptions.bins = opts.bins;
   return decomposeWithSystem(system, file, curveOptions, io);
 }
 
-function fromOptions(file: string, opts: DecomposeCliOptions, io: CliIo): Decomposition {
+function fromOptions(file: string[], opts: DecomposeCliOptions, io: CliIo): FileDecomposition {
   if (opts.period === undefined) throw inputError('invalid-input', '--period', 'missing: give --period DAYS (or --system FILE with planet.periodDays)');
   const geometry = geometryFrom(opts);
-  const curve = readCurveCsv(io.cwd, file);
+  const { curve, files } = readLightCurveFiles(io.cwd, file, columnOptions(opts));
   if (curve.column === 'phase' && opts.epoch !== undefined) io.err('note: --epoch is not used: the curve is already folded');
-  return decompose(curve, {
+  const d = decompose(curve, {
     periodDays: opts.period,
     ...(opts.epoch !== undefined ? { epochDays: opts.epoch } : {}),
     geometry,
@@ -153,7 +202,10 @@ function fromOptions(file: string, opts: DecomposeCliOptions, io: CliIo): Decomp
       ...(opts.predictedEllipsoidal ? { ellipsoidalPpm: opts.predictedEllipsoidal } : {}),
     },
     scaleErrors: opts.scaleErrors ?? false,
+    trendOrder: opts.trendOrder,
+    gapDays: opts.gap,
   });
+  return { ...d, files };
 }
 
 const round = (x: number): number => Number(x.toPrecision(4));
@@ -179,10 +231,31 @@ function pm(q: ValueSigma | null, unit: string, digits = 1): string {
   return `${q.value.toFixed(digits)} +- ${s} ${unit}`.trimEnd();
 }
 
-function textReport(file: string, r: Decomposition): string {
+function fileLine(f: CurveFileSummary): string {
+  const drop = f.dropped;
+  const parts = [`${f.points} of ${f.rows} rows used`];
+  if (drop.quality > 0) parts.push(`${drop.quality} masked by ${f.columns?.quality ?? 'quality'} flags`);
+  if (drop.nonFinite > 0) parts.push(`${drop.nonFinite} with NaN dropped`);
+  if (drop.nonPositiveError > 0) parts.push(`${drop.nonPositiveError} with error <= 0 dropped`);
+  if (f.format === 'fits' && f.columns) {
+    parts.push(`${f.columns.time} + ${f.timeOffsetDays} d${f.timeSystem ? ` (${f.timeSystem})` : ''}, ${f.columns.flux} / median ${f.medianFlux!.toPrecision(6)}`);
+  }
+  return `  ${f.file} (${f.format === 'fits' ? `FITS ${f.extension}` : 'CSV'}): ${parts.join('; ')}`;
+}
+
+function segmentLine(k: number, s: Decomposition['segments'][number]): string {
+  const span = s.start !== null && s.end !== null ? `${s.start.toFixed(3)}-${s.end.toFixed(3)}` : 'folded';
+  const norm = s.normalisation ? `normalisation ${s.normalisation.value.toFixed(6)} +- ${s.normalisation.sigma.toExponential(1)}` : 'not fitted (no point left)';
+  return `  ${String(k + 1).padStart(2)} ${s.file}  ${span}  ${s.points} points  trend order ${Math.max(s.trendOrder, 0)}  ${norm}`;
+}
+
+function textReport(file: string, r: FileDecomposition): string {
   const d = r.data;
   const lines: string[] = [];
   lines.push(`decomposition of ${file}: ${d.inputPoints} points, ${d.maskedTransitPoints} masked in transit, ${d.inEclipsePoints} in eclipse${d.bins !== null ? `, fitted in ${d.bins} bins` : ''}`);
+  for (const f of r.files) lines.push(fileLine(f));
+  lines.push(`baseline: ${r.segments.length} segment${r.segments.length === 1 ? '' : 's'}, ${r.trendTerms} trend term${r.trendTerms === 1 ? '' : 's'} (gap ${r.model.gapDays} d, trend order ${r.model.trendOrder})`);
+  if (r.segments.length > 1) for (const [k, s] of r.segments.entries()) lines.push(segmentLine(k, s));
   lines.push(`model: ${r.model.phaseModel} phase term, ${r.model.offsetFitted ? 'offset fitted' : 'no offset'}, eclipse shape ${r.model.eclipseShape}, inclination ${r.model.inclinationDeg.toFixed(2)} deg`);
   lines.push('');
   const beamingLabel = r.model.sineTerm === 'offset-beaming-fixed' ? 'beaming (fixed)' : 'beaming';
@@ -225,6 +298,7 @@ function textReport(file: string, r: Decomposition): string {
   lines.push('');
   lines.push('notes:');
   for (const n of r.notes) lines.push(`  - ${n}`);
+  for (const f of r.files) for (const n of f.notes) lines.push(`  - ${f.file}: ${n}`);
   if (r.warnings.length > 0) {
     lines.push('warnings:');
     for (const w of r.warnings) lines.push(`  - ${w}`);
