@@ -63,7 +63,7 @@ export function doiProblem(doi: string): string | undefined {
   const bad = [...doi.slice(doi.indexOf('/') + 1)].find((c) => !DOI_SUFFIX_CHAR.test(c));
   return bad === undefined
     ? 'the part after the slash is empty'
-    : `the character ${describeChar(bad)} is not allowed in a DOI here (allowed after the slash: letters, digits and - . _ ; ( ) / : < > [ ] + * ' ! = , & ~ $)`;
+    : `${describeChar(bad)} is not allowed in a DOI here (allowed after the slash: letters, digits and - . _ ; ( ) / : < > [ ] + * ' ! = , & ~ $)`;
 }
 
 /** Why a URL cannot be written safely, or undefined when it can. */
@@ -73,7 +73,7 @@ export function urlProblem(url: string): string | undefined {
   const rest = url.replace(/^https?:\/\//, '');
   if (rest.includes('@')) return 'a URL here may not contain @ (no user information; write @ in a path as %40)';
   const bad = [...rest].find((c) => c !== '%' && !URL_CHAR.test(c));
-  if (bad !== undefined) return `the character ${describeChar(bad)} is not allowed in a URL (RFC 3986 characters only: percent-encode it)`;
+  if (bad !== undefined) return `${describeChar(bad)} is not allowed in a URL (RFC 3986 characters only: percent-encode it)`;
   if (/%(?![0-9A-Fa-f]{2})/.test(rest)) return 'a % in a URL must start a percent-escape such as %20';
   return 'the host is missing or malformed (http://host/path)';
 }
@@ -119,5 +119,5 @@ export function authorsProblem(authors: string): string | undefined {
 
 function describeChar(c: string): string {
   if (/\s/.test(c)) return 'white space';
-  return `"${c}"`;
+  return `the character "${c}"`;
 }
