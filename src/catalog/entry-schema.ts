@@ -18,22 +18,21 @@ import {
   USER_PROVENANCE,
   type PlanetClass,
 } from './vocab.ts';
+import { authorsProblem, DOI_PATTERN, doiProblem, textProblem, URL_PATTERN, urlProblem } from './source-fields.ts';
 
-const optionalText = (max: number) => z.string().trim().min(1).max(max).nullable().optional();
+/** A string refused, with the reason, when the writers could not write it safely (rules in source-fields.ts). */
+const writable = (schema: z.ZodString, problem: (s: string) => string | undefined) =>
+  schema.superRefine((s, ctx) => {
+    const p = problem(s);
+    if (p !== undefined) ctx.addIssue({ code: 'custom', message: p });
+  });
+const bibText = (max: number) => writable(z.string().trim().min(1).max(max), textProblem);
+const optionalText = (max: number) => bibText(max).nullable().optional();
 const optionalCode = z
-  .union([z.string().trim().min(1).max(60), z.number().int().nonnegative()])
+  .union([bibText(60), z.number().int().nonnegative()])
   .transform((v) => String(v))
   .nullable()
   .optional();
-
-function bracesBalanced(text: string): boolean {
-  let depth = 0;
-  for (const ch of text) {
-    if (ch === '{') depth++;
-    else if (ch === '}' && --depth < 0) return false;
-  }
-  return depth === 0;
-}
 
 export const sourceKeySchema = z
   .string()
@@ -49,24 +48,14 @@ export const sourceRecordSchema = z
   .object({
     key: sourceKeySchema,
     type: z.enum(SOURCE_TYPES).default('article'),
-    authors: z
-      .string()
-      .trim()
-      .min(1)
-      .max(4000)
-      .refine(bracesBalanced, 'braces in authors must be balanced (use them only around a corporate name)'),
+    authors: writable(z.string().trim().min(1).max(4000), authorsProblem),
     year: z.number().int().min(1600).max(2200).nullable().optional(),
-    title: z.string().trim().min(1).max(1000),
+    title: bibText(1000),
     journal: optionalText(300),
     publisher: optionalText(300),
     volume: optionalCode,
     pages: optionalCode,
-    doi: z
-      .string()
-      .trim()
-      .regex(/^10\.\d{4,9}\/\S+$/, 'a DOI looks like 10.1234/abc (without https://doi.org/)')
-      .nullable()
-      .optional(),
+    doi: writable(z.string().trim(), doiProblem).meta({ pattern: DOI_PATTERN.source, description: 'DOI without https://doi.org/, e.g. 10.1234/abc' }).nullable().optional(),
     arxiv: z
       .string()
       .trim()
@@ -79,12 +68,7 @@ export const sourceRecordSchema = z
       .regex(BIBCODE_PATTERN, 'an ADS bibcode has 19 characters: year, journal, volume, page and initial padded with dots, e.g. 2017Icar..282...19M')
       .nullable()
       .optional(),
-    url: z
-      .string()
-      .trim()
-      .regex(/^https?:\/\/[^\s{}]+$/, 'a URL starts with http:// or https:// and has no spaces or braces')
-      .nullable()
-      .optional(),
+    url: writable(z.string().trim().max(2000), urlProblem).meta({ pattern: URL_PATTERN.source, description: 'http(s) URL of RFC 3986 characters, without @' }).nullable().optional(),
     note: optionalText(4000),
     /** Accepted so exported records can be re-added; new records are always user rows. */
     origin: z.enum(ORIGINS).optional(),

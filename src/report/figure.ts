@@ -37,12 +37,54 @@ export function figureCandidates(i: Interpretation): Candidate[] {
   return shown;
 }
 
+/** Longest candidate name in a row label (our choice: about the width of the plot at 10 px type). */
+const LABEL_CHARS = 72;
+const ROW_STEP_PX = 30;
+const PLOT_WIDTH_PX = 520;
+
+/** A candidate's name for a row: Mie grains shortened to "MnS, 0.1 µm grains". */
+function rowName(c: Candidate): string {
+  const mie = /^(.*?),\s*r_eff\s+([\d.]+)\s*um\s*\(Mie\)$/.exec(c.name);
+  return mie ? `${mie[1]}, ${mie[2]} µm grains` : proseName(c);
+}
+
 /** Row label: the candidate's name (shortened) and status. */
 export function rowLabel(c: Candidate): string {
-  const mie = /^(.*?),\s*r_eff\s+([\d.]+)\s*um\s*\(Mie\)$/.exec(c.name);
-  const name = mie ? `${mie[1]}, ${mie[2]} µm grains` : proseName(c);
-  const short = name.length > 48 ? `${name.slice(0, 46)}..` : name;
+  const name = rowName(c);
+  const short = name.length > LABEL_CHARS ? `${name.slice(0, LABEL_CHARS - 1)}…` : name;
   return `${short} [${c.status}]`;
+}
+
+export interface FigureRow {
+  /** Unique key of the row (its position), so equal labels never share a row. */
+  row: string;
+  id: string;
+  label: string;
+  status: Candidate['status'];
+  lo: number;
+  hi: number;
+  nominal: number;
+}
+
+/**
+ * One row per candidate shown, each with a label of its own: labels that come out
+ * equal (names cut at the same length, or repeated names) get an index, "#1", "#2".
+ */
+export function figureRows(shown: readonly Candidate[]): FigureRow[] {
+  const labels = shown.map(rowLabel);
+  const count = new Map<string, number>();
+  for (const l of labels) count.set(l, (count.get(l) ?? 0) + 1);
+  const seen = new Map<string, number>();
+  return shown.map((c, k) => {
+    const base = labels[k]!;
+    let label = base;
+    if (count.get(base)! > 1) {
+      const n = (seen.get(base) ?? 0) + 1;
+      seen.set(base, n);
+      label = base.replace(/ \[(consistent|marginal|excluded)\]$/, ` #${n} [$1]`);
+    }
+    return { row: String(k).padStart(3, '0'), id: c.id, label, status: c.status, lo: c.geometricAlbedoRange[0], hi: c.geometricAlbedoRange[1], nominal: c.geometricAlbedoNominal };
+  });
 }
 
 export function figureSpec(i: Interpretation, geometricAlbedoGrid: Float64Array): TopLevelSpec {
@@ -55,29 +97,32 @@ export function figureSpec(i: Interpretation, geometricAlbedoGrid: Float64Array)
     const b = a + width;
     return { lo: a, hi: b, density: (cdfAt(geometricAlbedoGrid, b) - cdfAt(geometricAlbedoGrid, a)) / width };
   });
-  const rows = shown.map((c) => ({ label: rowLabel(c), status: c.status, lo: c.geometricAlbedoRange[0], hi: c.geometricAlbedoRange[1], nominal: c.geometricAlbedoNominal }));
+  const rows = figureRows(shown);
   const x = { scale: { domain: [0, xMax], nice: false, zero: true } };
   const band = `${i.band.label} band, ${Math.round(i.band.minNm)}-${Math.round(i.band.maxNm)} nm`;
   const ceiling = i.verdict.ceiling
     ? [{ ag: i.verdict.ceiling.geometricAlbedo, text: `cloud-free ceiling ${i.verdict.ceiling.geometricAlbedo.toFixed(2)}` }]
     : [];
+  const ceilingOnRight = (i.verdict.ceiling?.geometricAlbedo ?? 0) > xMax / 2;
   const ceilingLayers = ceiling.length === 0 ? [] : [
     { data: { values: ceiling }, mark: { type: 'rule' as const, strokeDash: [6, 4], color: 'black' }, encoding: { x: { field: 'ag', type: 'quantitative' as const } } },
   ];
+  const rowY = { field: 'row', type: 'nominal' as const, sort: null, title: null, axis: null, scale: { paddingInner: 0, paddingOuter: 0.2 } };
   const statusScale = { domain: ['consistent', 'marginal', 'excluded'], range: ['circle', 'square', 'cross'] };
   return {
     $schema: 'https://vega.github.io/schema/vega-lite/v6.json',
     description: `Geometric albedo of ${i.name} and the catalog candidates shown`,
     title: {
       text: `${i.name}: geometric albedo and catalog candidates`,
-      subtitle: `clouds or ice required: ${i.verdict.cloudsOrIceRequired}; rows: catalog candidates [status], intervals converted to A_g in this band`,
+      // Short lines: the layout measures text by an estimate, and one long line would widen the figure.
+      subtitle: [`clouds or ice required: ${i.verdict.cloudsOrIceRequired}`, 'rows: catalog candidates [status]', 'intervals converted to A_g in this band'],
       anchor: 'start',
     },
     config: { font: 'Helvetica, Arial, sans-serif', axis: { labelColor: 'black', titleColor: 'black', gridColor: '#dddddd' }, view: { stroke: 'black' } },
     resolve: { scale: { x: 'shared' } },
     vconcat: [
       {
-        width: 520,
+        width: PLOT_WIDTH_PX,
         height: 160,
         layer: [
           {
@@ -86,26 +131,29 @@ export function figureSpec(i: Interpretation, geometricAlbedoGrid: Float64Array)
             encoding: {
               x: { field: 'lo', type: 'quantitative', ...x, title: null, axis: { labels: false, ticks: true } },
               x2: { field: 'hi' },
-              y: { field: 'density', type: 'quantitative', title: 'posterior density (per unit A_g)' },
+              y: { field: 'density', type: 'quantitative', title: ['posterior density', '(per unit A_g)'] },
             },
           },
           ...ceilingLayers,
           ...(ceiling.length === 0 ? [] : [{
             data: { values: ceiling },
-            mark: { type: 'text' as const, align: 'left' as const, dx: 4, dy: -4, baseline: 'bottom' as const, fontSize: 11, color: 'black' },
+            // beside the line, on the side with room, so the text stays inside the plot
+            mark: { type: 'text' as const, align: ceilingOnRight ? 'right' as const : 'left' as const, dx: ceilingOnRight ? -4 : 4, dy: -4, baseline: 'bottom' as const, fontSize: 11, color: 'black' },
             encoding: { x: { field: 'ag', type: 'quantitative' as const }, y: { value: 12 }, text: { field: 'text', type: 'nominal' as const } },
           }]),
         ],
       },
       {
-        width: 520,
-        height: { step: 18 },
+        // Labels are drawn inside the plot above each interval, so the left margin is
+        // only the width of the histogram's density axis.
+        width: PLOT_WIDTH_PX,
+        height: { step: ROW_STEP_PX },
         layer: [
           {
             data: { values: rows },
-            mark: { type: 'rule', strokeWidth: 2, color: 'black' },
+            mark: { type: 'rule', strokeWidth: 2, color: 'black', yOffset: 4 },
             encoding: {
-              y: { field: 'label', type: 'nominal', sort: null, title: null, axis: { labelLimit: 1000 } },
+              y: rowY,
               x: { field: 'lo', type: 'quantitative', ...x, title: `geometric albedo A_g (dimensionless; ${band})` },
               x2: { field: 'hi' },
               strokeDash: { field: 'status', type: 'nominal', scale: { domain: statusScale.domain, range: [[1, 0], [6, 3], [2, 2]] }, legend: { title: 'status', orient: 'bottom' } },
@@ -113,12 +161,19 @@ export function figureSpec(i: Interpretation, geometricAlbedoGrid: Float64Array)
           },
           {
             data: { values: rows },
-            mark: { type: 'point', filled: false, size: 60, color: 'black', strokeWidth: 1.5 },
+            mark: { type: 'point', filled: false, size: 50, color: 'black', strokeWidth: 1.5, yOffset: 4 },
             encoding: {
-              y: { field: 'label', type: 'nominal', sort: null },
+              y: rowY,
               x: { field: 'nominal', type: 'quantitative' },
               shape: { field: 'status', type: 'nominal', scale: statusScale, legend: { title: 'status', orient: 'bottom' } },
             },
+          },
+          {
+            data: { values: rows },
+            // clip: the layout estimates text widths generously (0.8 em a character), so
+            // unclipped labels would widen the figure; at 10 px they fit the plot.
+            mark: { type: 'text', align: 'left', baseline: 'bottom', dx: 3, yOffset: -3, fontSize: 10, color: 'black', clip: true },
+            encoding: { y: rowY, x: { value: 0 }, text: { field: 'label', type: 'nominal' } },
           },
           ...ceilingLayers,
         ],

@@ -18,7 +18,7 @@ describe('temperature feasibility from condensation curves', () => {
   });
 
   it('MgSiO3 clouds are feasible at 1400 K and excluded at 2600 K', () => {
-    // Issue 5: from the curve, not from a list. T_cond(MgSiO3, 1 bar, solar) = 1e4 / 6.26 = 1597 K
+    // From the curve, not from a list. T_cond(MgSiO3, 1 bar, solar) = 1e4 / 6.26 = 1597 K
     // (derived from a = 6.26, Visscher et al. 2010, from memory), T_cond(1e-3 bar) = 1e4 / (6.26 + 3 * 0.35) = 1368 K.
     const at1400 = checkTemperature(mgsio3Cloud, temperatures([1380, 1420]));
     expect(at1400.kind).toBe('condensation');
@@ -45,7 +45,7 @@ describe('temperature feasibility from condensation curves', () => {
   });
 
   it('water ice is excluded on a 1500 K planet, as a cloud (saturation curve) and as a surface (window)', () => {
-    // Issue 5. H2O condenses near 260 K at 1 bar for solar water (Buck 1981 vapour pressure; src/physics).
+    // H2O condenses near 260 K at 1 bar for solar water (Buck 1981 vapour pressure; src/physics).
     const ctx = temperatures([1450, 1550]);
     expect(checkTemperature(waterIceCloud, ctx).grade).toBe('excluded');
     const surface = checkTemperature(iceSurface, ctx);

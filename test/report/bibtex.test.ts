@@ -60,7 +60,8 @@ describe('escaping', () => {
     expect(lib.errors).toEqual([]);
     expect(lib.entries[0]!.fields.note).toBe(title);
     expect(lib.entries[0]!.fields.journal).toBe('A & B');
-    expect(escapeLatex('50% & $5 #1 a_b {c} ~ ^ \\')).toBe('50\\% \\& \\$5 \\#1 a\\_b \\{c\\} \\textasciitilde{} \\textasciicircum{} \\textbackslash{}');
+    expect(escapeLatex('50% & $5 #1 a_b {c} ~ ^ \\')).toBe('50\\% \\& \\$5 \\#1 a\\_b {\\textbraceleft}c{\\textbraceright} {\\textasciitilde} {\\textasciicircum} {\\textbackslash}');
+    expect(escapeLatex('<a> | @b')).toBe('{\\textless}a{\\textgreater} {\\textbar} {\\symbol{64}}b');
   });
 
   it('writes accents as commands and symbols as text commands', () => {

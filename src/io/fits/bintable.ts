@@ -2,10 +2,10 @@
  * Binary-table extensions (FITS Standard 4.0, IAU FITS Working Group 2018, section
  * 7.3): NAXIS1 bytes per row, NAXIS2 rows, TFIELDS columns, each with TFORMn = rT
  * (repeat r, default 1, and a type letter), stored big-endian. Types and widths
- * (table 18 of the standard): L logical 1, X bit ceil(r/8) bytes, B unsigned byte 1,
+ * (FITS Standard 4.0, 2018, table 18): L logical 1, X bit ceil(r/8) bytes, B unsigned byte 1,
  * I 16-bit 2, J 32-bit 4, K 64-bit 8, A character 1, E float 4, D double 8, C complex 8,
  * M double complex 16, P and Q array descriptors 8 and 16. Numeric values are returned
- * as physical values TZEROn + TSCALn x stored (section 7.3.2); an integer equal to
+ * as physical values TZEROn + TSCALn x stored (FITS Standard 4.0, 2018, section 7.3.2); an integer equal to
  * TNULLn, and a logical that is neither T nor F, become NaN. Columns of types A, C, M,
  * P and Q are listed but not read as numbers.
  */

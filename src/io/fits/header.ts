@@ -51,7 +51,7 @@ const REAL = /^[+-]?(\d+\.?\d*|\.\d+)([EeDd][+-]?\d+)?$/;
 /** Parses the value field (columns 11-80) of a card: [value, rest of the card]. */
 function parseValue(field: string, where: () => string, label: string): FitsValue | undefined {
   const text = field.trimStart();
-  if (text === '' || text.startsWith('/')) return undefined; // undefined value (section 4.2)
+  if (text === '' || text.startsWith('/')) return undefined; // undefined value (FITS Standard 4.0, 2018, section 4.2)
   if (text.startsWith("'")) {
     let out = '';
     let i = 1;
@@ -66,7 +66,7 @@ function parseValue(field: string, where: () => string, label: string): FitsValu
       }
       break;
     }
-    // Trailing spaces of a string are not significant; leading ones are (section 4.2.1).
+    // Trailing spaces of a string are not significant; leading ones are (FITS Standard 4.0, 2018, section 4.2.1).
     return out.replace(/ +$/, '');
   }
   const slash = text.indexOf('/');
