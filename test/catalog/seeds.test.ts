@@ -127,7 +127,7 @@ describe('spot checks of seeded values against their sources', () => {
     expect(byId('isotropic-w090-semi-infinite').valueNominal).toBe(0.31);
   });
 
-  it('Mie w0 of MgSiO3 glass 0.9999 / 0.9997 at 550 / 800 nm for r_eff 0.1 um (computed, reflectivity.md C1)', () => {
+  it('Mie w0 of MgSiO3 glass 0.9999 / 0.9997 at 550 / 800 nm for r_eff 0.1 um (computed from the Kitzmann & Heng 2018 refractive index)', () => {
     const e = byId('mie-mgsio3-glass-r0p1um');
     expect(e).toMatchObject({ quantity: 'single-scattering', condensate: 'MgSiO3', provenance: 'computed', category: 'cloud' });
     expect(e.spectrum).toEqual([{ wavelengthNm: 550, value: 0.9999 }, { wavelengthNm: 800, value: 0.9997 }]);
@@ -135,43 +135,46 @@ describe('spot checks of seeded values against their sources', () => {
   });
 });
 
-describe('condensation curves (reference/physics.md table, coefficients from memory)', () => {
-  const expected: [string, number, number, number, number, string][] = [
-    ['Fe', 5.44, 0.48, 0.48, 0, 'Visscher2010'],
-    ['Mg2SiO4', 5.89, 0.37, 0.73, 0, 'Visscher2010'],
-    ['MgSiO3', 6.26, 0.35, 0.7, 0, 'Visscher2010'],
-    ['Al2O3', 5.0139, 0.21794, 0.58, 2.2636e-3, 'Wakeford2017'],
-    ['CaTiO3', 5.125, 0.277, 0.554, 0, 'Wakeford2017'],
-    ['Cr', 6.576, 0.486, 0.486, 0, 'Morley2012'],
-    ['MnS', 7.45, 0.42, 0.84, 0, 'Visscher2006'],
-    ['Na2S', 10.05, 0.72, 1.08, 0, 'Visscher2006'],
-    ['ZnS', 12.52, 0.63, 1.26, 0, 'Visscher2006'],
-    ['KCl', 12.479, 0.879, 0.879, 0, 'Morley2012'],
+describe('condensation curves 1e4/T = a - b log10 P - c [M/H] + d (log10 P)^2', () => {
+  // Coefficients as stored; "secondary" where they equal the public condensation-curve code of
+  // C. V. Morley (virga package, condensables.py), "memory" where no copy of the equation was read.
+  const expected: [string, number, number, number, number, string, string][] = [
+    ['Fe', 5.44, 0.48, 0.48, 0, 'Visscher2010', 'secondary'],
+    ['Mg2SiO4', 5.89, 0.37, 0.73, 0, 'Visscher2010', 'secondary'],
+    ['MgSiO3', 6.26, 0.35, 0.7, 0, 'Visscher2010', 'secondary'],
+    ['Al2O3', 5.0139, 0.21794, 0.58, 2.2636e-3, 'Wakeford2017', 'memory'],
+    ['CaTiO3', 5.125, 0.277, 0.554, 0, 'Wakeford2017', 'memory'],
+    ['Cr', 6.576, 0.486, 0.486, 0, 'Morley2012', 'memory'],
+    ['MnS', 7.45, 0.42, 0.84, 0, 'Visscher2006', 'secondary'],
+    ['Na2S', 10.05, 0.72, 1.08, 0, 'Visscher2006', 'secondary'],
+    ['ZnS', 12.52, 0.63, 1.26, 0, 'Visscher2006', 'secondary'],
+    ['KCl', 12.479, 0.879, 0.879, 0, 'Morley2012', 'secondary'],
   ];
 
-  it('stores the ten curves exactly as the table gives them, with their status notes', () => {
+  it('stores the ten curves with their coefficients, sources and how each was checked', () => {
     const curves = catalog.listCondensates();
     expect(curves.length).toBe(10);
-    for (const [species, a, b, c, d, key] of expected) {
+    for (const [species, a, b, c, d, key, provenance] of expected) {
       const curve = curves.find((x) => x.species === species)!;
-      expect(curve, species).toMatchObject({ a, b, c, d, sourceKey: key, provenance: 'memory', validPressureBar: [1e-4, 100] });
+      expect(curve, species).toMatchObject({ a, b, c, d, sourceKey: key, provenance, validPressureBar: [1e-4, 100] });
+      if (provenance === 'secondary') expect(curve.note, species).toContain('virga');
     }
-    expect(curves.find((x) => x.species === 'MgSiO3')!.note).toContain('uncertain');
+    expect(curves.find((x) => x.species === 'Cr')!.note).toContain('6.528');
   });
 
-  it('reproduce the temperatures physics.md derives from them', () => {
+  it('reproduce the temperatures their notes state', () => {
     const tCond = (species: string, pBar: number, mh = 0) => {
       const k = catalog.listCondensates().find((x) => x.species === species)!;
       const lp = Math.log10(pBar);
       return 1e4 / (k.a - k.b * lp - k.c * mh + k.d * lp * lp);
     };
-    // derived in reference/physics.md: solar metallicity, 1 bar
+    // solar metallicity, 1 bar
     expect(tCond('Cr', 1)).toBeCloseTo(1521, 0);
     expect(tCond('MnS', 1)).toBeCloseTo(1342, 0);
     expect(tCond('Na2S', 1)).toBeCloseTo(995, 0);
     expect(tCond('ZnS', 1)).toBeCloseTo(799, 0);
     expect(tCond('KCl', 1)).toBeCloseTo(801, 0);
-    // physics.md notes at 1e-3 bar (compared there with Lodders & Fegley 1993)
+    // 1e-3 bar
     expect(Math.round(tCond('Fe', 1e-3))).toBe(1453);
     expect(Math.round(tCond('Al2O3', 1e-3))).toBe(1758);
     expect(Math.round(tCond('CaTiO3', 1e-3))).toBe(1679);
