@@ -69,8 +69,11 @@ describe('spot checks of seeded values against their sources', () => {
     expect(byId('jupiter-bond-li2018').sources).toContain('Li2018Jupiter');
   });
 
-  it('Jupiter Bond albedo 0.343 +- 0.032 and q = 1.25 (Hanel et al. 1981, JGR 86, 8705)', () => {
+  it('Jupiter Bond albedo 0.343 +- 0.032 and q = 1.25 (Hanel et al. 1980, NASA TM-80723)', () => {
     expect(byId('jupiter-bond-hanel1981')).toMatchObject({ valueNominal: 0.343, valueMin: 0.311, valueMax: 0.375 });
+    expect(byId('jupiter-bond-hanel1981').sources).toContain('Hanel1980Jupiter');
+    // 124.7 K: (1 - 0.503) * 1360.8 / (4 * 5.203^2) + 7.485 W m-2 of internal heat (Li et al. 2018), as a blackbody.
+    expect(byId('jupiter-bond-li2018')).toMatchObject({ temperatureMinK: 124.7, temperatureMaxK: 124.7, appliesTo: ['giant'] });
   });
 
   it('Mars geometric albedo 0.170 and Bond albedo 0.250 (NASA NSSDC Mars fact sheet)', () => {
@@ -83,10 +86,10 @@ describe('spot checks of seeded values against their sources', () => {
     expect(byId('earth-geometric-v-nssdc').valueNominal).toBe(0.434);
   });
 
-  it('Enceladus 1.38-1.41 at opposition (Verbiscer et al. 2005, Icarus 173, 66; 2007, Science 315, 815)', () => {
-    expect(byId('enceladus-geometric-555-verbiscer2005')).toMatchObject({ valueNominal: 1.41, provenance: 'secondary' });
-    // 1.375 is recorded in reflectivity.md S28 as "from memory": the seed says so.
-    expect(byId('enceladus-geometric-v-verbiscer2007')).toMatchObject({ valueNominal: 1.375, provenance: 'memory' });
+  it('Enceladus equigonal albedo 0.89 +- 0.03 at 0.55 um (Filacchione et al. 2022, Icarus 375, 114803)', () => {
+    expect(byId('enceladus-equigonal-550-filacchione2022')).toMatchObject({ valueMin: 0.86, valueNominal: 0.89, valueMax: 0.92, provenance: 'checked' });
+    // Subsolar temperature of a black surface at Saturn, 9.537 AU, with 1360.8 W m-2 (Kopp & Lean 2011): 127.4 K.
+    expect(byId('enceladus-equigonal-550-filacchione2022').temperatureMaxK).toBe(127.4);
   });
 
   it('Tethys 1.23 and Dione 1.00 at true opposition (Verbiscer et al. 2007, Science 315, 815)', () => {
