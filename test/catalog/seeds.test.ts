@@ -50,16 +50,15 @@ describe('curated seed content', () => {
     }
   });
 
-  it('records the ocean-asphalt-grass comparison as common practice naming each table', () => {
-    for (const id of ['ocean-typical-common-practice', 'asphalt-fresh-typical-common-practice', 'grass-typical-common-practice']) {
-      const e = byId(id);
-      expect(e.description).toContain('Common practice');
-      for (const table of ['Payne 1972', 'Climate Dynamics Table 5.1', 'Shuttleworth 2012', 'LBNL', 'Yildirim 2013', 'Wikipedia compilation']) {
-        expect(e.description, `${id} names ${table}`).toContain(table);
-      }
-    }
-    // reference/README.md: grass ranges from 0.10 to 0.25 between compilations; record the range.
-    expect(byId('grass-typical-common-practice')).toMatchObject({ valueMin: 0.1, valueMax: 0.25 });
+  it('records ocean, snow and vegetation albedos from field measurements, each with its liquid-water or ice window', () => {
+    // Payne (1972), J. Atmos. Sci. 29, 959: 0.03 for high Sun, up to 0.45 below 10 degrees, 0.061 +- 0.005 under overcast.
+    expect(byId('ocean-high-sun-payne1972')).toMatchObject({ valueNominal: 0.03, temperatureMinK: 273.16, temperatureMaxK: 372.8, appliesTo: ['rocky'] });
+    expect(byId('ocean-low-sun-payne1972').valueNominal).toBe(0.45);
+    expect(byId('ocean-overcast-payne1972')).toMatchObject({ valueMin: 0.056, valueNominal: 0.061, valueMax: 0.066 });
+    // Betts & Ball (1997), JGR 102, 28901: summer grass 0.2, aspen 0.15, conifers 0.083; snow-covered grass 0.75 in winter.
+    expect(byId('grass-summer-betts1997')).toMatchObject({ category: 'vegetation', valueNominal: 0.2 });
+    expect(byId('conifer-forest-summer-betts1997').valueNominal).toBe(0.083);
+    expect(byId('snow-covered-grass-winter-betts1997')).toMatchObject({ category: 'ice', valueNominal: 0.75, temperatureMaxK: 273.16 });
   });
 });
 
