@@ -123,7 +123,7 @@ describe('spot checks of seeded values against their sources', () => {
     expect(byId('rayleigh-w090-semi-infinite').valueNominal).toBe(0.398);
   });
 
-  it('isotropic scatterers A_g 0.69 / 0.53 / 0.31 at w = 1 / 0.99 / 0.90 (computed, reference/reflectivity.md X10)', () => {
+  it('isotropic scatterers A_g 0.69 / 0.53 / 0.31 at w = 1 / 0.99 / 0.90 (computed with Chandrasekhar\'s H-function)', () => {
     expect(byId('isotropic-w100-semi-infinite')).toMatchObject({ valueNominal: 0.69, provenance: 'computed' });
     expect(byId('isotropic-w099-semi-infinite').valueNominal).toBe(0.53);
     expect(byId('isotropic-w090-semi-infinite').valueNominal).toBe(0.31);
