@@ -30,7 +30,7 @@ describe('seeding and re-seeding', () => {
     const file = tempDbPath();
     const catalog = openCatalog({ path: file, seedsDir: seeds });
     catalog.addUserEntry(userEntry('invented-user-a', { spectrum: [{ wavelengthNm: 600, value: 0.14 }] }));
-    catalog.addUserEntry(userEntry('invented-user-b', { sources: [{ key: 'InventedUser2026', authors: 'Nobody, A.', title: 'Invented', type: 'misc' }, 'Hu2012'] }));
+    catalog.addUserEntry(userEntry('invented-user-b', { sources: [{ key: 'InventedUser2026', authors: 'Nobody, A.', title: 'Invented', type: 'misc' }, 'Bell2017'] }));
     // A user entry whose id a later seed version also uses: the user row must win.
     catalog.addUserEntry(userEntry('invented-collision'));
     catalog.close();

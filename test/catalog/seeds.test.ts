@@ -37,33 +37,27 @@ describe('curated seed content', () => {
 
   it('covers the groups the catalog promises', () => {
     const count = (pred: (e: CatalogEntry) => boolean) => entries.filter(pred).length;
-    // Cloud-free references: clear giant atmospheres in several temperature regimes and
-    // lava for hot rocky planets (seeds/cloud-free.json); idealised laws are models.
     expect(count((e) => e.category === 'clear-atmosphere')).toBeGreaterThanOrEqual(5);
     expect(count((e) => e.category === 'model')).toBeGreaterThanOrEqual(5);
     expect(count((e) => e.category === 'lava')).toBeGreaterThanOrEqual(1);
     expect(count((e) => e.quantity === 'single-scattering' && e.condensate !== null)).toBeGreaterThanOrEqual(60);
     // Measured albedos of exoplanets live in the comparison set, not among the entries.
     expect(catalog.listComparisons().filter((c) => c.band.id === 'kepler').length).toBeGreaterThanOrEqual(5);
-    // No metal-surface albedo could be checked in a primary source, so 'metal' has no curated row.
     for (const c of ['ocean', 'vegetation', 'soil', 'ice', 'cloud', 'haze', 'regolith']) {
       expect(CATEGORIES).toContain(c);
       expect(count((e) => e.category === c), c).toBeGreaterThan(0);
     }
   });
 
-  it('records the ocean-asphalt-grass comparison as common practice naming each table', () => {
-    // Building materials are not planetary surfaces, so asphalt has no entry of its own;
-    // the comparison stays in the ocean and grass entries with each table named.
-    for (const id of ['ocean-typical-common-practice', 'grass-typical-common-practice']) {
-      const e = byId(id);
-      expect(e.description).toContain('Common practice');
-      for (const table of ['Payne 1972', 'Climate Dynamics Table 5.1', 'Shuttleworth 2012', 'LBNL', 'Yildirim 2013', 'Wikipedia compilation']) {
-        expect(e.description, `${id} names ${table}`).toContain(table);
-      }
-    }
-    // The compilations disagree on grass (0.10 to 0.25, common practice): the range is recorded.
-    expect(byId('grass-typical-common-practice')).toMatchObject({ valueMin: 0.1, valueMax: 0.25 });
+  it('records ocean, snow and vegetation albedos from field measurements, each with its liquid-water or ice window', () => {
+    // Payne (1972), J. Atmos. Sci. 29, 959: 0.03 for high Sun, up to 0.45 below 10 degrees, 0.061 +- 0.005 under overcast.
+    expect(byId('ocean-high-sun-payne1972')).toMatchObject({ valueNominal: 0.03, temperatureMinK: 273.16, temperatureMaxK: 372.8, appliesTo: ['rocky'] });
+    expect(byId('ocean-low-sun-payne1972').valueNominal).toBe(0.45);
+    expect(byId('ocean-overcast-payne1972')).toMatchObject({ valueMin: 0.056, valueNominal: 0.061, valueMax: 0.066 });
+    // Betts & Ball (1997), JGR 102, 28901: summer grass 0.2, aspen 0.15, conifers 0.083; snow-covered grass 0.75 in winter.
+    expect(byId('grass-summer-betts1997')).toMatchObject({ category: 'vegetation', valueNominal: 0.2 });
+    expect(byId('conifer-forest-summer-betts1997').valueNominal).toBe(0.083);
+    expect(byId('snow-covered-grass-winter-betts1997')).toMatchObject({ category: 'ice', valueNominal: 0.75, temperatureMaxK: 273.16 });
   });
 });
 
@@ -73,8 +67,11 @@ describe('spot checks of seeded values against their sources', () => {
     expect(byId('jupiter-bond-li2018').sources).toContain('Li2018Jupiter');
   });
 
-  it('Jupiter Bond albedo 0.343 +- 0.032 and q = 1.25 (Hanel et al. 1981, JGR 86, 8705)', () => {
+  it('Jupiter Bond albedo 0.343 +- 0.032 and q = 1.25 (Hanel et al. 1980, NASA TM-80723)', () => {
     expect(byId('jupiter-bond-hanel1981')).toMatchObject({ valueNominal: 0.343, valueMin: 0.311, valueMax: 0.375 });
+    expect(byId('jupiter-bond-hanel1981').sources).toContain('Hanel1980Jupiter');
+    // 124.7 K: (1 - 0.503) * 1360.8 / (4 * 5.203^2) + 7.485 W m-2 of internal heat (Li et al. 2018), as a blackbody.
+    expect(byId('jupiter-bond-li2018')).toMatchObject({ temperatureMinK: 124.7, temperatureMaxK: 124.7, appliesTo: ['giant'] });
   });
 
   it('Mars geometric albedo 0.170 and Bond albedo 0.250 (NASA NSSDC Mars fact sheet)', () => {
@@ -87,10 +84,10 @@ describe('spot checks of seeded values against their sources', () => {
     expect(byId('earth-geometric-v-nssdc').valueNominal).toBe(0.434);
   });
 
-  it('Enceladus 1.38-1.41 at opposition (Verbiscer et al. 2005, Icarus 173, 66; 2007, Science 315, 815)', () => {
-    expect(byId('enceladus-geometric-555-verbiscer2005')).toMatchObject({ valueNominal: 1.41, provenance: 'secondary' });
-    // 1.375 was recalled, not seen in the paper: the seed says so (provenance memory).
-    expect(byId('enceladus-geometric-v-verbiscer2007')).toMatchObject({ valueNominal: 1.375, provenance: 'memory' });
+  it('Enceladus equigonal albedo 0.89 +- 0.03 at 0.55 um (Filacchione et al. 2022, Icarus 375, 114803)', () => {
+    expect(byId('enceladus-equigonal-550-filacchione2022')).toMatchObject({ valueMin: 0.86, valueNominal: 0.89, valueMax: 0.92, provenance: 'checked' });
+    // Subsolar temperature of a black surface at Saturn, 9.537 AU, with 1360.8 W m-2 (Kopp & Lean 2011): 127.4 K.
+    expect(byId('enceladus-equigonal-550-filacchione2022').temperatureMaxK).toBe(127.4);
   });
 
   it('Tethys 1.23 and Dione 1.00 at true opposition (Verbiscer et al. 2007, Science 315, 815)', () => {
@@ -125,13 +122,13 @@ describe('spot checks of seeded values against their sources', () => {
     expect(byId('rayleigh-w090-semi-infinite').valueNominal).toBe(0.398);
   });
 
-  it('isotropic scatterers A_g 0.69 / 0.53 / 0.31 at w = 1 / 0.99 / 0.90 (computed with the Chandrasekhar 1960 H-function)', () => {
+  it('isotropic scatterers A_g 0.69 / 0.53 / 0.31 at w = 1 / 0.99 / 0.90 (computed with Chandrasekhar\'s H-function)', () => {
     expect(byId('isotropic-w100-semi-infinite')).toMatchObject({ valueNominal: 0.69, provenance: 'computed' });
     expect(byId('isotropic-w099-semi-infinite').valueNominal).toBe(0.53);
     expect(byId('isotropic-w090-semi-infinite').valueNominal).toBe(0.31);
   });
 
-  it('Mie w0 of MgSiO3 glass 0.9999 / 0.9997 at 550 / 800 nm for r_eff 0.1 um (computed: Mie theory, Bohren & Huffman 1983, with optical constants of Dorschner et al. 1995)', () => {
+  it('Mie w0 of MgSiO3 glass 0.9999 / 0.9997 at 550 / 800 nm for r_eff 0.1 um (computed from the Kitzmann & Heng 2018 refractive index)', () => {
     const e = byId('mie-mgsio3-glass-r0p1um');
     expect(e).toMatchObject({ quantity: 'single-scattering', condensate: 'MgSiO3', provenance: 'computed', category: 'cloud' });
     expect(e.spectrum).toEqual([{ wavelengthNm: 550, value: 0.9999 }, { wavelengthNm: 800, value: 0.9997 }]);
@@ -139,43 +136,46 @@ describe('spot checks of seeded values against their sources', () => {
   });
 });
 
-describe('condensation curves (coefficients from memory, sources per species)', () => {
-  const expected: [string, number, number, number, number, string][] = [
-    ['Fe', 5.44, 0.48, 0.48, 0, 'Visscher2010'],
-    ['Mg2SiO4', 5.89, 0.37, 0.73, 0, 'Visscher2010'],
-    ['MgSiO3', 6.26, 0.35, 0.7, 0, 'Visscher2010'],
-    ['Al2O3', 5.0139, 0.21794, 0.58, 2.2636e-3, 'Wakeford2017'],
-    ['CaTiO3', 5.125, 0.277, 0.554, 0, 'Wakeford2017'],
-    ['Cr', 6.576, 0.486, 0.486, 0, 'Morley2012'],
-    ['MnS', 7.45, 0.42, 0.84, 0, 'Visscher2006'],
-    ['Na2S', 10.05, 0.72, 1.08, 0, 'Visscher2006'],
-    ['ZnS', 12.52, 0.63, 1.26, 0, 'Visscher2006'],
-    ['KCl', 12.479, 0.879, 0.879, 0, 'Morley2012'],
+describe('condensation curves 1e4/T = a - b log10 P - c [M/H] + d (log10 P)^2', () => {
+  // Coefficients as stored; "secondary" where they equal the public condensation-curve code of
+  // C. V. Morley (virga package, condensables.py), "memory" where no copy of the equation was read.
+  const expected: [string, number, number, number, number, string, string][] = [
+    ['Fe', 5.44, 0.48, 0.48, 0, 'Visscher2010', 'secondary'],
+    ['Mg2SiO4', 5.89, 0.37, 0.73, 0, 'Visscher2010', 'secondary'],
+    ['MgSiO3', 6.26, 0.35, 0.7, 0, 'Visscher2010', 'secondary'],
+    ['Al2O3', 5.0139, 0.21794, 0.58, 2.2636e-3, 'Wakeford2017', 'memory'],
+    ['CaTiO3', 5.125, 0.277, 0.554, 0, 'Wakeford2017', 'memory'],
+    ['Cr', 6.576, 0.486, 0.486, 0, 'Morley2012', 'memory'],
+    ['MnS', 7.45, 0.42, 0.84, 0, 'Visscher2006', 'secondary'],
+    ['Na2S', 10.05, 0.72, 1.08, 0, 'Visscher2006', 'secondary'],
+    ['ZnS', 12.52, 0.63, 1.26, 0, 'Visscher2006', 'secondary'],
+    ['KCl', 12.479, 0.879, 0.879, 0, 'Morley2012', 'secondary'],
   ];
 
-  it('stores the ten curves exactly as the table gives them, with their status notes', () => {
+  it('stores the ten curves with their coefficients, sources and how each was checked', () => {
     const curves = catalog.listCondensates();
     expect(curves.length).toBe(10);
-    for (const [species, a, b, c, d, key] of expected) {
+    for (const [species, a, b, c, d, key, provenance] of expected) {
       const curve = curves.find((x) => x.species === species)!;
-      expect(curve, species).toMatchObject({ a, b, c, d, sourceKey: key, provenance: 'memory', validPressureBar: [1e-4, 100] });
+      expect(curve, species).toMatchObject({ a, b, c, d, sourceKey: key, provenance, validPressureBar: [1e-4, 100] });
+      if (provenance === 'secondary') expect(curve.note, species).toContain('virga');
     }
-    expect(curves.find((x) => x.species === 'MgSiO3')!.note).toContain('uncertain');
+    expect(curves.find((x) => x.species === 'Cr')!.note).toContain('6.528');
   });
 
-  it('reproduce the temperatures derived from the fits', () => {
+  it('reproduce the temperatures their notes state', () => {
     const tCond = (species: string, pBar: number, mh = 0) => {
       const k = catalog.listCondensates().find((x) => x.species === species)!;
       const lp = Math.log10(pBar);
       return 1e4 / (k.a - k.b * lp - k.c * mh + k.d * lp * lp);
     };
-    // derived from the fits: solar metallicity, 1 bar
+    // solar metallicity, 1 bar
     expect(tCond('Cr', 1)).toBeCloseTo(1521, 0);
     expect(tCond('MnS', 1)).toBeCloseTo(1342, 0);
     expect(tCond('Na2S', 1)).toBeCloseTo(995, 0);
     expect(tCond('ZnS', 1)).toBeCloseTo(799, 0);
     expect(tCond('KCl', 1)).toBeCloseTo(801, 0);
-    // at 1e-3 bar (Fe 1453 K as in Lodders & Fegley 1993, Icarus 115, 95; the others derived)
+    // 1e-3 bar
     expect(Math.round(tCond('Fe', 1e-3))).toBe(1453);
     expect(Math.round(tCond('Al2O3', 1e-3))).toBe(1758);
     expect(Math.round(tCond('CaTiO3', 1e-3))).toBe(1679);

@@ -32,7 +32,7 @@ describe('hesper catalog', () => {
     const col = lines[0]!.indexOf('CATEGORY');
     const jupiter = lines.find((l) => l.startsWith('jupiter-bond-li2018 '))!;
     expect(jupiter.slice(col, col + 4)).toBe('body');
-    expect(jupiter).toMatch(/bond\s+200-5000\s+0\.503\s+0\.491-0\.515\s+<=150\s+checked\s+curated/);
+    expect(jupiter).toMatch(/bond\s+200-5000\s+0\.503\s+0\.491-0\.515\s+124\.7\s+checked\s+curated/);
     expect(r.err).toMatch(/^\d+ entries$/);
   });
 

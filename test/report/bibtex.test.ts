@@ -33,18 +33,19 @@ describe('BibTeX of the whole catalog', () => {
     const get = (key: string) => lib.entries.find((e) => e.key === key)!;
     expect(nfc(get('GarciaMunozIsaak2015').fields.author?.[0]?.lastName)).toBe('García Muñoz');
     expect(get('GarciaMunozIsaak2015').fields.author?.[0]?.firstName).toBe('A.');
-    expect(nfc(get('Jager2003').fields.author?.[0]?.lastName)).toBe('Jäger');
+    expect(nfc(get('Dorschner1995').fields.author?.[3]?.lastName)).toBe('Jäger');
     expect(nfc(get('Rakic1998').fields.author?.[0]?.lastName)).toBe('Rakić');
     expect(nfc(get('Eftekhar2022').fields.journal)).toBe('Revista Mexicana de Astronomía y Astrofísica');
-    expect(nfc(get('HuffmanWild1967').fields.title)).toContain('α-MnS');
+    expect(nfc(get('WagnerPruss2002').fields.author?.[1]?.lastName)).toBe('Pruß');
     expect(get('Filacchione2022').fields.author?.[2]?.lastName).toBe("D'Aversa");
   });
 
   it('keeps corporate authors whole and writes "others" for et al.', () => {
-    const nssdc = lib.entries.find((e) => e.key === 'NSSDCMoonOld')!;
-    expect(nssdc.fields.author).toEqual([{ name: 'NASA Space Science Data Coordinated Archive' }]);
+    const jpl = lib.entries.find((e) => e.key === 'JPLApproxPositions')!;
+    expect(jpl.fields.author).toEqual([{ name: 'JPL Solar System Dynamics Group' }]);
     const li = lib.entries.find((e) => e.key === 'Li2018Jupiter')!;
-    expect(li.fields.author?.map((a) => a.lastName)).toEqual(['Li', 'others']);
+    expect(li.fields.author?.map((a) => a.lastName)).toEqual(expect.arrayContaining(['Li', 'Jiang', 'others']));
+    expect(li.fields.author?.at(-1)?.lastName).toBe('others');
   });
 
   it('round-trips DOIs with special characters and arXiv ids', () => {
