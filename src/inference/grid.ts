@@ -44,9 +44,19 @@ export interface GridResult {
   weights: Float64Array;
   /** Whether the model eclipse depth decreases somewhere along the grid, per draw. */
   depthFalls: Uint8Array;
-  /** Largest model eclipse depth and phase amplitude over all draws and nodes [ppm]. */
+  /** Largest and smallest model eclipse depth and phase amplitude over all draws and nodes [ppm]. */
   maxDepthPpm: number;
   maxAmplitudePpm: number;
+  minDepthPpm: number;
+  minAmplitudePpm: number;
+  /**
+   * Largest log-likelihood over all draws and nodes (the best fit anywhere in the prior;
+   * additive constants dropped as in likelihood.ts, so -2 x this is the minimum
+   * chi-square for Gaussian errors).
+   */
+  maxLogLikelihood: number;
+  /** ln of the prior-averaged likelihood (the evidence, same constants dropped). */
+  logEvidence: number;
 }
 
 /** ln of (1 - A_B)^(1/4) at the grid's Bond albedos A_B = j / (nodes - 1) (Cowan & Agol 2011 scaling). */
@@ -73,6 +83,9 @@ export function runGrid(draws: Nuisance[], settings: ModelSettings, lik: Likelih
   const logL = new Float64Array(nodes);
   let maxDepthPpm = -Infinity;
   let maxAmplitudePpm = -Infinity;
+  let minDepthPpm = Infinity;
+  let minAmplitudePpm = Infinity;
+  let maxLogLikelihood = -Infinity;
   const inv = 1 / (nodes - 1);
 
   const dayRow = new Float64Array(nodes);
@@ -101,6 +114,7 @@ export function runGrid(draws: Nuisance[], settings: ModelSettings, lik: Likelih
       const depth = agUnit[j]! * perAg + 1e6 * dayRow[j]!;
       depthRow[j] = depth;
       if (depth > maxDepthPpm) maxDepthPpm = depth;
+      if (depth < minDepthPpm) minDepthPpm = depth;
       if (depth < prevDepth) depthFalls[i] = 1;
       prevDepth = depth;
     }
@@ -114,6 +128,7 @@ export function runGrid(draws: Nuisance[], settings: ModelSettings, lik: Likelih
           const amplitude = agUnit[j]! * perAgAmp + (dayRow[j]! - nightRow[j]!) * thermalAmp;
           signal[j] = amplitude;
           if (amplitude > maxAmplitudePpm) maxAmplitudePpm = amplitude;
+          if (amplitude < minAmplitudePpm) minAmplitudePpm = amplitude;
         }
         if (phaseAmplitudePpm) phaseAmplitudePpm.accumulate(signal, logL, nodes);
         if (joint) {
@@ -138,6 +153,7 @@ export function runGrid(draws: Nuisance[], settings: ModelSettings, lik: Likelih
     let rowMax = -Infinity;
     for (let j = 0; j < nodes; j++) if (logL[j]! > rowMax) rowMax = logL[j]!;
     const base = i * nodes;
+    if (rowMax > maxLogLikelihood) maxLogLikelihood = rowMax;
     if (rowMax === -Infinity) {
       logZ[i] = -Infinity;
       continue;
@@ -161,7 +177,20 @@ export function runGrid(draws: Nuisance[], settings: ModelSettings, lik: Likelih
     trap -= 0.5 * (rows[base]! + rows[base + nodes - 1]!);
     logZ[i] = rowMax + Math.log(trap * inv);
   }
-  return { nodes, draws, models, masses, rows, cells, weights: normaliseLogWeights(logZ), depthFalls, maxDepthPpm, maxAmplitudePpm };
+  return {
+    nodes, draws, models, masses, rows, cells, weights: normaliseLogWeights(logZ), depthFalls,
+    maxDepthPpm, maxAmplitudePpm, minDepthPpm, minAmplitudePpm, maxLogLikelihood, logEvidence: logMeanExp(logZ),
+  };
+}
+
+/** ln of the mean of exp(logZ) (the prior average of the draws' evidences); -Infinity when none has support. */
+export function logMeanExp(logZ: Float64Array): number {
+  let max = -Infinity;
+  for (const v of logZ) if (v > max) max = v;
+  if (max === -Infinity) return -Infinity;
+  let sum = 0;
+  for (const v of logZ) sum += Math.exp(v - max);
+  return max + Math.log(sum / logZ.length);
 }
 
 /** exp(logZ - max) normalised to sum 1; all zeros if no draw has support. */

@@ -11,13 +11,16 @@ import type { SystemInput } from '../io/system.ts';
 import { assumptionLines } from './assumptions.ts';
 import { effectiveSampleSize, runGrid } from './grid.ts';
 import { significanceSigma } from './likelihood.ts';
-import { drawMeasurement, likelihoodsOf } from './measurements.ts';
-import { type Nuisance, drawNuisance, withCorner } from './nuisance.ts';
+import { checkConsistency } from './consistency.ts';
+import { readConstraint } from './constraint.ts';
+import { runCorners } from './corners.ts';
+import { drawMeasurement, likelihoodsOf, type MassPredictionScale } from './measurements.ts';
+import { type Nuisance, drawNuisance } from './nuisance.ts';
 import { createRng, type Rng } from './random.ts';
 import { samplePosterior } from './sample-posterior.ts';
-import type { ModelSettings } from './signal-model.ts';
+import { type ModelSettings, predictMassEffects } from './signal-model.ts';
 import { quantileSorted, roundSig, summarize } from './summary.ts';
-import type { AlbedoPosterior, InferenceResult, MassEffects, PosteriorQuantiles, SensitivityRow } from './types.ts';
+import type { AlbedoPosterior, InferenceResult, MassEffects, PosteriorQuantiles } from './types.ts';
 import { posteriorWarnings } from './warnings.ts';
 
 export interface InferOptions {
@@ -27,14 +30,6 @@ export interface InferOptions {
   /** A generator to use instead of one seeded from `seed` (tests). */
   rng?: Rng;
 }
-
-/** Corners of the sensitivity table: no / full redistribution x q = 1 / 1.5 (Lambert). */
-export const SENSITIVITY_CORNERS: ReadonlyArray<{ redistribution: number; phaseIntegral: number }> = [
-  { redistribution: 0, phaseIntegral: 1 },
-  { redistribution: 0, phaseIntegral: 1.5 },
-  { redistribution: 1, phaseIntegral: 1 },
-  { redistribution: 1, phaseIntegral: 1.5 },
-];
 
 function settingsOf(s: SystemInput): ModelSettings {
   return { band: s.band, weighting: s.assumptions.weighting, thermal: s.assumptions.thermal !== 'none' };
@@ -55,21 +50,19 @@ function allReflected(s: SystemInput, draws: Nuisance[], rng: Rng) {
   return summarize(values);
 }
 
-function sensitivity(s: SystemInput, draws: Nuisance[], settings: ModelSettings, seed: number): SensitivityRow[] {
-  const lik = likelihoodsOf(s);
-  // A sixteenth of the draws (at least 250): enough for the medians and intervals of a
-  // sensitivity table, at a fraction of the main grid's cost.
-  const count = Math.max(250, Math.floor(draws.length / 16));
-  const subset = draws.slice(0, count);
-  return SENSITIVITY_CORNERS.map((corner, c) => {
-    const fixed = subset.map((th) => withCorner(th, corner.redistribution, corner.phaseIntegral));
-    const grid = runGrid(fixed, settings, lik, Math.max(64, Math.floor(s.assumptions.gridNodes / 4)));
-    if (!grid.weights.some((w) => w > 0)) {
-      return { ...corner, geometricAlbedo: summarize([NaN]) };
-    }
-    const post = samplePosterior(grid, settings, createRng(seed * 7919 + 101 + c), count);
-    return { ...corner, geometricAlbedo: summarize(post.geometricAlbedo) };
-  });
+/** Median predicted mass-effect amplitudes over the first prior draws (the scale of their model uncertainty), when masses are known. */
+function massScaleOf(draws: Nuisance[], band: ModelSettings['band']): MassPredictionScale | undefined {
+  const e: number[] = [];
+  const b: number[] = [];
+  for (let i = 0; i < draws.length && e.length < 500; i++) {
+    const m = predictMassEffects(draws[i]!, band);
+    if (!m) continue;
+    e.push(m.ellipsoidalPpm);
+    b.push(m.beamingPpm);
+  }
+  if (e.length === 0) return undefined;
+  const med = (v: number[]) => quantileSorted(Float64Array.from(v).sort(), 0.5);
+  return { ellipsoidalPpm: med(e), beamingPpm: med(b) };
 }
 
 function massEffectsOf(grid: ReturnType<typeof runGrid>, drawIndex: Int32Array): MassEffects | undefined {
@@ -113,7 +106,8 @@ export function inferAlbedoDetailed(s: SystemInput, options: InferOptions = {}):
 
   const draws: Nuisance[] = new Array(samples);
   for (let i = 0; i < samples; i++) draws[i] = drawNuisance(s, rng);
-  const grid = runGrid(draws, settings, likelihoodsOf(s), nodes);
+  const lik = likelihoodsOf(s, massScaleOf(draws, settings.band));
+  const grid = runGrid(draws, settings, lik, nodes);
   if (!grid.weights.some((w) => w > 0)) {
     throw new HesperError('no-posterior-support', 'no draw reproduces the measurements', [
       { path: 'measurements', message: 'every model signal has zero likelihood under the measurements; check the values and their uncertainties' },
@@ -125,11 +119,18 @@ export function inferAlbedoDetailed(s: SystemInput, options: InferOptions = {}):
   const massEffects = massEffectsOf(grid, post.drawIndex);
   const m = s.measurements;
   const detected = [m.eclipseDepthPpm, m.phaseAmplitudePpm].some((d) => d !== undefined && significanceSigma(d) >= 3);
+  const corners = runCorners(s, draws, settings, lik, seed, grid);
+  const agGrid = quantileGrid(post.geometricAlbedo);
+  const agSummary = summarize(post.geometricAlbedo);
+  const constraint = readConstraint(agGrid, agSummary.lower68, agSummary.upper68, corners.rows);
+  const consistency = checkConsistency({
+    system: s, grid, posterior: post, corners: corners.rows, bestLogLikelihood: Math.max(grid.maxLogLikelihood, corners.maxLogLikelihood),
+  });
 
   const result: AlbedoPosterior = {
     name: s.name,
     band: { id: s.band.id, label: s.band.label, minNm: roundSig(s.band.minNm, 6), maxNm: roundSig(s.band.maxNm, 6), approximate: s.band.approximate, weighting: s.assumptions.weighting },
-    geometricAlbedo: summarize(post.geometricAlbedo),
+    geometricAlbedo: { ...agSummary, constraint: constraint.constraint },
     bondAlbedo: summarize(post.bondAlbedo),
     daysideTemperatureK: summarize(post.daysideTemperatureK),
     equilibriumTemperatureK: summarize(post.equilibriumTemperatureK),
@@ -138,14 +139,19 @@ export function inferAlbedoDetailed(s: SystemInput, options: InferOptions = {}):
     thermalFraction,
     allReflectedGeometricAlbedo: allReflected(s, draws, rng),
     detected,
-    sensitivity: sensitivity(s, draws, settings, seed),
+    reflectedLightDetected: constraint.constraint === 'measured' && consistency.fit.reproducesData,
+    sensitivity: corners.rows,
+    modelFit: consistency.fit,
     ...(massEffects ? { massEffects } : {}),
     assumptions: assumptionLines(s),
     diagnostics: { effectiveSampleSize: roundSig(ess, 4), samples, gridNodes: nodes, seed, computeMs: 0 },
-    warnings: posteriorWarnings({ system: s, grid, posterior: post, thermalFraction, ...(massEffects ? { massEffects } : {}), effectiveSampleSize: ess }),
+    warnings: [
+      ...consistency.warnings,
+      ...posteriorWarnings({ system: s, grid, posterior: post, thermalFraction, ...(massEffects ? { massEffects } : {}), effectiveSampleSize: ess }),
+    ],
   };
   const quantiles: PosteriorQuantiles = {
-    geometricAlbedo: quantileGrid(post.geometricAlbedo),
+    geometricAlbedo: agGrid,
     daysideTemperatureK: quantileGrid(post.daysideTemperatureK),
     equilibriumTemperatureK: quantileGrid(post.equilibriumTemperatureK),
   };

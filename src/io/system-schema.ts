@@ -4,6 +4,7 @@
  */
 import { z } from 'zod';
 import { measurementQuantity, parameterQuantity } from './quantity-schema.ts';
+import { DEFAULT_PHASE_INTEGRAL } from './system-fields.ts';
 
 const opt = <T extends z.ZodType>(s: T, d: string) => s.optional().describe(d);
 
@@ -65,7 +66,8 @@ export const assumptionsSchema = z
     thermal: z.enum(['self-consistent', 'none']).default('self-consistent').describe('Model the thermal emission (default) or assume pure reflection.'),
     weighting: z.enum(['photon', 'energy']).default('photon').describe('Band integrals per photon (default) or per energy.'),
     redistribution: parameterQuantity.default({ min: 0, max: 1 }).describe('Heat-redistribution efficiency eps in [0, 1].'),
-    phaseIntegral: parameterQuantity.default({ min: 1, max: 1.5 }).describe('Phase integral q; A_B = q A_g.'),
+    phaseIntegral: parameterQuantity.default({ ...DEFAULT_PHASE_INTEGRAL })
+      .describe(`Phase integral q; A_B = q A_g. Default uniform on [${DEFAULT_PHASE_INTEGRAL.min}, ${DEFAULT_PHASE_INTEGRAL.max}]: from below conservative Rayleigh scattering (1.25) past the Lambert sphere (1.5) to semi-infinite isotropic scatterers with single-scattering albedo 0.5 (1.61).`),
     limbDarkening: parameterQuantity.default({ min: 0.45, max: 0.75 }).describe('Linear limb-darkening coefficient u of the star (typical values).'),
     gravityDarkening: parameterQuantity.default({ min: 0.3, max: 0.4 }).describe('Gravity-darkening coefficient g of the star (typical values).'),
     planetClass: z.enum(['auto', 'giant', 'rocky']).default('auto').describe('Planet class for the cloud-free ceiling; auto decides from the radius.'),
