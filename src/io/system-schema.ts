@@ -71,6 +71,8 @@ export const assumptionsSchema = z
     limbDarkening: parameterQuantity.default({ min: 0.45, max: 0.75 }).describe('Linear limb-darkening coefficient u of the star (typical values).'),
     gravityDarkening: parameterQuantity.default({ min: 0.3, max: 0.4 }).describe('Gravity-darkening coefficient g of the star (typical values).'),
     planetClass: z.enum(['auto', 'giant', 'rocky']).default('auto').describe('Planet class for the cloud-free ceiling; auto decides from the radius.'),
+    userEntryTemperature: z.enum(['window', 'condensation']).default('window')
+      .describe("For your own catalog entries that give both a temperature window and a condensing species: test the planet's temperature against the entry's window (default) or against the species' condensation curve."),
     samples: z.number().int().min(100).max(100_000).default(4000).describe('Number of nuisance draws.'),
     gridNodes: z.number().int().min(16).max(4096).default(256).describe('Geometric-albedo grid nodes per draw.'),
     seed: z.number().int().min(0).max(2 ** 31 - 1).default(1).describe('Seed of the random generator.'),
