@@ -16,6 +16,7 @@ import { readConstraint } from './constraint.ts';
 import { runCorners } from './corners.ts';
 import { drawMeasurement, likelihoodsOf, type MassPredictionScale } from './measurements.ts';
 import { type Nuisance, drawNuisance } from './nuisance.ts';
+import { nuisancePosterior, phaseIntegralSentence } from './nuisance-posterior.ts';
 import { createRng, type Rng } from './random.ts';
 import { samplePosterior } from './sample-posterior.ts';
 import { type ModelSettings, predictMassEffects } from './signal-model.ts';
@@ -120,6 +121,7 @@ export function inferAlbedoDetailed(s: SystemInput, options: InferOptions = {}):
   const m = s.measurements;
   const detected = [m.eclipseDepthPpm, m.phaseAmplitudePpm].some((d) => d !== undefined && significanceSigma(d) >= 3);
   const corners = runCorners(s, draws, settings, lik, seed, grid);
+  const nuisance = nuisancePosterior(draws, post.drawIndex);
   const agGrid = quantileGrid(post.geometricAlbedo);
   const agSummary = summarize(post.geometricAlbedo);
   const constraint = readConstraint(agGrid, agSummary.lower68, agSummary.upper68, corners.rows);
@@ -142,6 +144,8 @@ export function inferAlbedoDetailed(s: SystemInput, options: InferOptions = {}):
     reflectedLightDetected: constraint.constraint === 'measured' && consistency.fit.reproducesData,
     sensitivity: corners.rows,
     modelFit: consistency.fit,
+    nuisancePosterior: nuisance,
+    phaseIntegralPreference: phaseIntegralSentence(nuisance),
     ...(massEffects ? { massEffects } : {}),
     assumptions: assumptionLines(s),
     diagnostics: { effectiveSampleSize: roundSig(ess, 4), samples, gridNodes: nodes, seed, computeMs: 0 },

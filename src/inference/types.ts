@@ -1,5 +1,6 @@
 /** The albedo posterior as reported in the interpretation JSON. */
 import type { AlbedoConstraint } from './constraint.ts';
+import type { NuisancePosterior } from './nuisance-posterior.ts';
 import type { Summary } from './summary.ts';
 
 export interface SensitivityRow {
@@ -57,6 +58,10 @@ export interface AlbedoPosterior {
   reflectedLightDetected: boolean;
   sensitivity: SensitivityRow[];
   modelFit: ModelFit;
+  /** Prior and posterior of eps and q. */
+  nuisancePosterior: NuisancePosterior;
+  /** Which phase integral the data prefer, if any, in words. */
+  phaseIntegralPreference: string;
   massEffects?: MassEffects;
   /** The assumptions that drove the result, in words. */
   assumptions: string[];

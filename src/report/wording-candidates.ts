@@ -77,6 +77,12 @@ export function candidateSentences(w: Writer): string[] {
     out.push(`${list(hot.map((c) => item(w, c, temperatureWhy(c, w))))} would match the albedo but ${hot.length === 1 ? 'is' : 'are'} excluded by the temperature (${t}).`);
   }
 
+  const untested = firstPerMaterial(materials.filter((c) => c.status === 'untested'), EXCLUDED_COUNT);
+  if (untested.length > 0) {
+    const more = materials.filter((c) => c.status === 'untested').length - untested.length;
+    out.push(`${list(untested.map((c) => item(w, c)))}${more > 0 ? ` and ${more} more` : ''} would match the albedo but ${untested.length + more === 1 ? 'has' : 'have'} no temperature window or condensation curve in the catalog, so ${untested.length + more === 1 ? 'it was' : 'they were'} not tested against this planet's temperature.`);
+  }
+
   const no = i.verdict.cloudsOrIceRequired === 'no';
   const feasible = materials.filter((c) => c.checks.albedo === 'excluded' && c.checks.temperature.grade !== 'excluded');
   const [lo95, hi95] = interval95(i.geometricAlbedo);

@@ -58,6 +58,11 @@ export const interpretationSchema = z.strictObject({
   reflectedLightDetected: z.boolean().describe('Reflected light is detected: geometricAlbedo.constraint is "measured" and the model reproduces the data.'),
   sensitivity: z.array(sensitivityRowSchema).describe('A_g at the corners of the (eps, q) priors.'),
   modelFit: modelFitSchema.describe('Whether the model reproduces the data.'),
+  nuisancePosterior: z.object({
+    redistribution: z.object({ prior: summarySchema, posterior: summarySchema }),
+    phaseIntegral: z.object({ prior: summarySchema, posterior: summarySchema }),
+  }).describe('Prior and posterior of the heat redistribution eps and the phase integral q.'),
+  phaseIntegralPreference: z.string().describe('Which phase integral the data prefer, if any, in words.'),
   massEffects: massEffectsSchema.optional().describe("The star's ellipsoidal and beaming signals and RV semi-amplitude, when masses are known."),
   assumptions: z.array(z.string()).describe('The assumptions that drove the result, in words.'),
   verdict: verdictSchema,
