@@ -26,6 +26,9 @@ export function assumptionLines(s: SystemInput): string[] {
     lines.push('Pure reflection: thermal emission of the planet ignored (assumptions.thermal = "none").');
   } else {
     lines.push(`Thermal emission: blackbody planet with dayside and nightside temperatures of Cowan & Agol (2011), heat redistribution eps ${describeDist(a.redistribution)}.`);
+    lines.push(a.thermal === 'local-equilibrium'
+      ? 'Dayside map: local equilibrium, T^4 = T0^4 (1 - A_B) [(1 - eps) cos theta + eps/4], integrated over the disk in the band (the same bolometric dayside flux as Cowan & Agol 2011, brighter in the Wien tail); the measured dayside temperature, if any, is compared with its bolometric-equivalent T_day.'
+      : 'Dayside map: uniform at T_day (assumptions.thermal = "local-equilibrium" puts the hot substellar region in the band integral).');
     lines.push('Star: blackbody at its effective temperature in the band-flux ratio.');
   }
   lines.push(`Bond albedo A_B = q A_g with phase integral q ${describeDist(a.phaseIntegral)}; a band geometric albedo stands in for the bolometric one.`);

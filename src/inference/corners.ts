@@ -19,7 +19,7 @@ import { type Nuisance, withCorner } from './nuisance.ts';
 import { createRng } from './random.ts';
 import { samplePosterior } from './sample-posterior.ts';
 import type { ModelSettings } from './signal-model.ts';
-import { quantileSorted, roundSig, summarize } from './summary.ts';
+import { quantileSorted, roundSig, summarize, type Summary } from './summary.ts';
 import type { SensitivityRow } from './types.ts';
 
 /** Delta chi^2 above which a corner is ruled out (95 % for two parameters; chi-square table). */
@@ -94,4 +94,38 @@ export function runCorners(
     };
   });
   return { rows, maxLogLikelihood };
+}
+
+/** How much the dayside map moves A_g: the same draws under the other map (uniform vs local equilibrium). */
+export interface DayMapShift {
+  /** The map of the main result and the alternative compared with it. */
+  used: 'uniform' | 'local-equilibrium';
+  alternative: 'uniform' | 'local-equilibrium';
+  /** A_g on the corner draws with the map used and with the alternative. */
+  geometricAlbedoUsed: Summary;
+  geometricAlbedoAlternative: Summary;
+  /** Median under the alternative minus median under the map used. */
+  medianShift: number;
+}
+
+/** The A_g posterior on the corner draws (eps and q as drawn) under both dayside maps; undefined without thermal emission. */
+export function runDayMapShift(
+  s: SystemInput, draws: Nuisance[], settings: ModelSettings, lik: Likelihoods, seed: number,
+): DayMapShift | undefined {
+  if (!settings.thermal) return undefined;
+  const { count, nodes } = cornerBudget(draws.length, s.assumptions.gridNodes);
+  const subset = draws.slice(0, count);
+  const alternative = settings.dayMap === 'uniform' ? 'local-equilibrium' : 'uniform';
+  const albedoUnder = (dayMap: ModelSettings['dayMap'], c: number) => {
+    const m = { ...settings, dayMap };
+    const grid = runGrid(subset, m, lik, nodes);
+    if (!grid.weights.some((w) => w > 0)) return summarize([NaN]);
+    return summarize(samplePosterior(grid, m, createRng(seed * 7919 + 211 + c), count).geometricAlbedo);
+  };
+  const used = albedoUnder(settings.dayMap, 0);
+  const alt = albedoUnder(alternative, 0);
+  return {
+    used: settings.dayMap, alternative, geometricAlbedoUsed: used, geometricAlbedoAlternative: alt,
+    medianShift: roundSig(alt.median - used.median, 4),
+  };
 }

@@ -7,7 +7,7 @@
  */
 import type { Nuisance } from './nuisance.ts';
 import type { LogLikelihood } from './likelihood.ts';
-import { type DrawModel, type MassPrediction, type ModelSettings, drawModel, planetDenseTable, predictMassEffects, thermalRatioRow } from './signal-model.ts';
+import { type DrawModel, type MassPrediction, type ModelSettings, applyDayMap, dayMapTable, drawModel, planetDenseTable, predictMassEffects, thermalRatioRow } from './signal-model.ts';
 
 /** A bivariate Gaussian likelihood of (eclipse depth, phase amplitude) with correlated errors. */
 export interface DepthAmplitudeJoint {
@@ -77,6 +77,7 @@ export function runGrid(draws: Nuisance[], settings: ModelSettings, lik: Likelih
   const lnC = lnAlbedoFactors(nodes);
   const factor = lnC.map(Math.exp);
   const table = planetDenseTable(settings);
+  const dayMap = dayMapTable(settings);
   const joint = lik.depthAmplitude;
   const needNight = lik.phaseAmplitudePpm !== undefined || lik.nightsideFluxPpm !== undefined || joint !== undefined;
   const depthRow = new Float64Array(nodes);
@@ -108,6 +109,7 @@ export function runGrid(draws: Nuisance[], settings: ModelSettings, lik: Likelih
     const invQ = 1 / th.phaseIntegral;
 
     thermalRatioRow(dm, table, dm.lnDayZeroK, lnC, dayRow);
+    if (dayMap) applyDayMap(dayMap, dm.lnDayZeroK, lnC, th.redistribution, dayRow);
     const perAg = 1e6 * dm.reflectedDepthPerAg * invQ;
     let prevDepth = -Infinity;
     for (let j = 0; j < nodes; j++) {

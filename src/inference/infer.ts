@@ -13,7 +13,7 @@ import { effectiveSampleSize, runGrid } from './grid.ts';
 import { significanceSigma } from './likelihood.ts';
 import { checkConsistency } from './consistency.ts';
 import { readConstraint } from './constraint.ts';
-import { runCorners } from './corners.ts';
+import { runCorners, runDayMapShift } from './corners.ts';
 import { drawMeasurement, likelihoodsOf, type MassPredictionScale } from './measurements.ts';
 import { type Nuisance, drawNuisance } from './nuisance.ts';
 import { nuisancePosterior, phaseIntegralSentence } from './nuisance-posterior.ts';
@@ -33,7 +33,10 @@ export interface InferOptions {
 }
 
 function settingsOf(s: SystemInput): ModelSettings {
-  return { band: s.band, weighting: s.assumptions.weighting, thermal: s.assumptions.thermal !== 'none' };
+  return {
+    band: s.band, weighting: s.assumptions.weighting, thermal: s.assumptions.thermal !== 'none',
+    dayMap: s.assumptions.thermal === 'local-equilibrium' ? 'local-equilibrium' : 'uniform',
+  };
 }
 
 function allReflected(s: SystemInput, draws: Nuisance[], rng: Rng) {
@@ -122,6 +125,7 @@ export function inferAlbedoDetailed(s: SystemInput, options: InferOptions = {}):
   const detected = [m.eclipseDepthPpm, m.phaseAmplitudePpm].some((d) => d !== undefined && significanceSigma(d) >= 3);
   const corners = runCorners(s, draws, settings, lik, seed, grid);
   const nuisance = nuisancePosterior(draws, post.drawIndex);
+  const dayMapShift = runDayMapShift(s, draws, settings, lik, seed);
   const agGrid = quantileGrid(post.geometricAlbedo);
   const agSummary = summarize(post.geometricAlbedo);
   const constraint = readConstraint(agGrid, agSummary.lower68, agSummary.upper68, corners.rows);
@@ -143,6 +147,7 @@ export function inferAlbedoDetailed(s: SystemInput, options: InferOptions = {}):
     detected,
     reflectedLightDetected: constraint.constraint === 'measured' && consistency.fit.reproducesData,
     sensitivity: corners.rows,
+    ...(dayMapShift ? { thermalMapSensitivity: dayMapShift } : {}),
     modelFit: consistency.fit,
     nuisancePosterior: nuisance,
     phaseIntegralPreference: phaseIntegralSentence(nuisance),

@@ -16,6 +16,7 @@ import { bandFlux, getBandTable } from '../physics/bandpass.ts';
 import { TABLE_MIN_K, denseFluxTable, type BandTable, type DenseFluxTable } from '../physics/band-table.ts';
 import { beamingAmplitude, ellipsoidalAmplitude, rvSemiAmplitudeMs } from '../physics/mass-effects.ts';
 import { lambertPhaseFunction } from '../physics/reflection.ts';
+import { localEquilibriumFactorAt, localEquilibriumTable, type LocalEquilibriumTable } from '../physics/local-equilibrium.ts';
 import { daysideTemperatureK, nightsideTemperatureK } from '../physics/temperature.ts';
 import type { Nuisance } from './nuisance.ts';
 
@@ -23,6 +24,20 @@ export interface ModelSettings {
   band: Band;
   weighting: 'photon' | 'energy';
   thermal: boolean;
+  /** Dayside brightness map: uniform at T_day (default) or in local equilibrium (local-equilibrium.ts). */
+  dayMap: 'uniform' | 'local-equilibrium';
+}
+
+/** The local-equilibrium factor table of the settings, or undefined for a uniform dayside. */
+export function dayMapTable(m: ModelSettings): LocalEquilibriumTable | undefined {
+  return m.thermal && m.dayMap === 'local-equilibrium' ? localEquilibriumTable(planetTable(m)) : undefined;
+}
+
+/** Multiplies a dayside flux row by the local-equilibrium factor C(T_day, eps) (the row's T_day at ln T = lnT0 + lnFactor[j]). */
+export function applyDayMap(t: LocalEquilibriumTable, lnT0: number, lnFactor: Float64Array, redistribution: number, row: Float64Array): void {
+  for (let j = 0; j < lnFactor.length; j++) {
+    if (row[j]! > 0) row[j]! *= localEquilibriumFactorAt(t, lnT0 + lnFactor[j]!, redistribution);
+  }
 }
 
 /** The band-flux table of the settings, fetched once for the hot loop. */

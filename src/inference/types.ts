@@ -1,5 +1,6 @@
 /** The albedo posterior as reported in the interpretation JSON. */
 import type { AlbedoConstraint } from './constraint.ts';
+import type { DayMapShift } from './corners.ts';
 import type { NuisancePosterior } from './nuisance-posterior.ts';
 import type { Summary } from './summary.ts';
 
@@ -57,6 +58,8 @@ export interface AlbedoPosterior {
   /** Reflected light is detected: the albedo constraint is "measured". */
   reflectedLightDetected: boolean;
   sensitivity: SensitivityRow[];
+  /** A_g under the other dayside map (uniform vs local equilibrium), on the corner draws; absent without thermal emission. */
+  thermalMapSensitivity?: DayMapShift;
   modelFit: ModelFit;
   /** Prior and posterior of eps and q. */
   nuisancePosterior: NuisancePosterior;

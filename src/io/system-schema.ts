@@ -63,7 +63,8 @@ export const measurementsSchema = z
 
 export const assumptionsSchema = z
   .object({
-    thermal: z.enum(['self-consistent', 'none']).default('self-consistent').describe('Model the thermal emission (default) or assume pure reflection.'),
+    thermal: z.enum(['self-consistent', 'local-equilibrium', 'none']).default('self-consistent')
+      .describe('Thermal emission: self-consistent (default; uniform dayside at the Cowan & Agol 2011 temperature), local-equilibrium (dayside T proportional to cos^(1/4) of the angle from the substellar point at eps = 0, blending to uniform as eps rises), or none (pure reflection).'),
     weighting: z.enum(['photon', 'energy']).default('photon').describe('Band integrals per photon (default) or per energy.'),
     redistribution: parameterQuantity.default({ min: 0, max: 1 }).describe('Heat-redistribution efficiency eps in [0, 1].'),
     phaseIntegral: parameterQuantity.default({ ...DEFAULT_PHASE_INTEGRAL })

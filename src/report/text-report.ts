@@ -43,6 +43,15 @@ export function sensitivityTable(r: AlbedoPosterior): string {
   return renderTable(['eps', 'q', 'A_g median', '68 % interval', '95 % upper', 'Delta chi^2', 'data'], rows, ['right', 'right', 'right', 'right', 'right', 'right', 'left']);
 }
 
+const MAP_WORDS = { uniform: 'a uniform dayside', 'local-equilibrium': 'a dayside in local equilibrium' } as const;
+
+/** How much the dayside map moves A_g (same draws, both maps). */
+export function dayMapLines(r: AlbedoPosterior): string[] {
+  const t = r.thermalMapSensitivity;
+  if (!t || !Number.isFinite(t.geometricAlbedoUsed.median) || !Number.isFinite(t.geometricAlbedoAlternative.median)) return [];
+  return [`  dayside map: median A_g ${fmtSig(t.geometricAlbedoUsed.median, 3)} with ${MAP_WORDS[t.used]} (used), ${fmtSig(t.geometricAlbedoAlternative.median, 3)} with ${MAP_WORDS[t.alternative]} (shift ${t.medianShift >= 0 ? '+' : ''}${fmtSig(t.medianShift, 2)}, same draws)`];
+}
+
 /** The albedo line: how the data constrain A_g, in words a referee would accept. */
 export function albedoLines(r: AlbedoPosterior): string[] {
   const g = r.geometricAlbedo;
@@ -90,6 +99,7 @@ export function textReport(r: AlbedoPosterior | Interpretation, options: TextRep
     'sensitivity of A_g to the redistribution eps and phase integral q (corners at the edges of their priors; Delta chi^2 against the best fit):',
     sensitivityTable(r),
     `  ${r.phaseIntegralPreference}`,
+    ...dayMapLines(r),
   );
   const mass = massEffectsTable(r);
   if (mass) parts.push('', mass);

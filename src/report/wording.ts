@@ -41,7 +41,8 @@ function modelSentence(w: Writer): string {
   const a = w.s.assumptions;
   const q = `the phase integral ${w.m.math('q')} (${w.t(describeDist(a.phaseIntegral))}) with ${w.m.math(`${AB} = q\\,${AG}`)}`;
   if (a.thermal === 'none') return `Thermal emission of the planet is neglected (pure reflection), with ${q}.`;
-  return `The planet's thermal emission is modelled as blackbody radiation from a dayside and a nightside hemisphere whose temperatures follow from energy balance${w.cite([w.c.method(METHOD_PAPERS.cowanAgol)])}, marginalising over the heat-redistribution efficiency ${w.m.math('\\varepsilon')} (${w.t(describeDist(a.redistribution))}) and ${q}.`;
+  const map = a.thermal === 'local-equilibrium' ? ' (the dayside in local equilibrium, its temperature falling as the fourth root of the cosine of the angle from the substellar point and blending to uniform as the redistribution rises)' : '';
+  return `The planet's thermal emission is modelled as blackbody radiation from a dayside${map} and a nightside hemisphere whose temperatures follow from energy balance${w.cite([w.c.method(METHOD_PAPERS.cowanAgol)])}, marginalising over the heat-redistribution efficiency ${w.m.math('\\varepsilon')} (${w.t(describeDist(a.redistribution))}) and ${q}.`;
 }
 
 /** The corner sentence: where the median A_g runs at the corners of the (eps, q) priors, and what drives it. */
@@ -88,6 +89,11 @@ function albedoSentences(w: Writer): string[] {
   }
   const corners = cornerSentence(w);
   if (corners) out.push(corners);
+  const map = i.thermalMapSensitivity;
+  if (map && Number.isFinite(map.medianShift)) {
+    const other = map.alternative === 'local-equilibrium' ? 'a dayside in local equilibrium (hotter at the substellar point, brighter in the Wien tail)' : 'a uniform dayside';
+    out.push(`Assuming ${other} instead would move the median ${m.math(AG)} by ${map.medianShift >= 0 ? '+' : ''}${sig2(map.medianShift)}.`);
+  }
   return out;
 }
 

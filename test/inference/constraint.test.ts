@@ -6,7 +6,7 @@ import type { SensitivityRow } from '../../src/inference/types.ts';
 import { resolveBand } from '../../src/physics/bandpass.ts';
 import { daysideTemperatureK } from '../../src/physics/temperature.ts';
 import { thermalEclipseDepth } from '../../src/physics/thermal.ts';
-import { loadDemo, parseJson } from './helpers.ts';
+import { demoJson as demoSystem, loadDemo, parseJson } from './helpers.ts';
 
 /** Quantile grid of a truncated normal N(mu, 1) on x >= 0 (1001 points), by inverting its CDF numerically. */
 function truncatedNormalGrid(mu: number): Float64Array {
@@ -92,5 +92,20 @@ describe('synthetic truth: A_g = 0.10, eps = 0.2 injected (invented system)', ()
     expect(r.geometricAlbedo.constraint).not.toBe('measured');
     expect(r.reflectedLightDetected).toBe(false);
     expect(r.detected).toBe(true);
+  });
+});
+
+describe('the local-equilibrium dayside map in the posterior (invented ultra-hot giant, Tessaly b)', () => {
+  it('brightens the thermal term, lowers A_g, and the sensitivity section shows by how much', () => {
+    const j = JSON.parse(JSON.stringify(demoSystem('systems/tessaly-b.json')));
+    const uniform = inferAlbedo(parseJson(j));
+    j.assumptions = { thermal: 'local-equilibrium' };
+    const local = inferAlbedo(parseJson(j));
+    // The same depth with a brighter thermal term leaves less for reflection (derived: C(T_day, eps) >= 1).
+    expect(local.geometricAlbedo.median).toBeLessThan(uniform.geometricAlbedo.median);
+    expect(uniform.thermalMapSensitivity).toMatchObject({ used: 'uniform', alternative: 'local-equilibrium' });
+    expect(uniform.thermalMapSensitivity!.medianShift).toBeLessThan(0);
+    expect(local.thermalMapSensitivity).toMatchObject({ used: 'local-equilibrium', alternative: 'uniform' });
+    expect(local.assumptions.join('\n')).toMatch(/Dayside map: local equilibrium/);
   });
 });

@@ -57,6 +57,13 @@ export const interpretationSchema = z.strictObject({
   detected: z.boolean().describe('The eclipse depth or phase amplitude is at least 3 sigma (the signal, not the albedo).'),
   reflectedLightDetected: z.boolean().describe('Reflected light is detected: geometricAlbedo.constraint is "measured" and the model reproduces the data.'),
   sensitivity: z.array(sensitivityRowSchema).describe('A_g at the corners of the (eps, q) priors.'),
+  thermalMapSensitivity: z.object({
+    used: z.enum(['uniform', 'local-equilibrium']),
+    alternative: z.enum(['uniform', 'local-equilibrium']),
+    geometricAlbedoUsed: optionalSummarySchema,
+    geometricAlbedoAlternative: optionalSummarySchema,
+    medianShift: z.number().nullable().describe('Median A_g under the alternative dayside map minus that under the map used.'),
+  }).optional().describe('How much the dayside brightness map (uniform or local equilibrium) moves A_g; absent without thermal emission.'),
   modelFit: modelFitSchema.describe('Whether the model reproduces the data.'),
   nuisancePosterior: z.object({
     redistribution: z.object({ prior: summarySchema, posterior: summarySchema }),
