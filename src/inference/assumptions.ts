@@ -1,6 +1,7 @@
 /** The assumptions that drove a result, in words, for the report and the JSON. */
 import type { Dist } from '../io/distribution.ts';
 import type { SystemInput } from '../io/system.ts';
+import { MASS_MODEL_FRACTION } from './measurements.ts';
 
 export function describeDist(d: Dist, digits = 3): string {
   const f = (x: number) => Number(x.toPrecision(digits)).toString();
@@ -36,7 +37,9 @@ export function assumptionLines(s: SystemInput): string[] {
   lines.push(`Band "${s.band.id}" (${bandRangeNm(s.band)} nm${s.band.approximate ? ', approximate shape' : ''}), integrals weighted per ${a.weighting}.`);
   if (s.measurements.daysideTemperatureK) lines.push('The measured dayside brightness temperature is compared with the model dayside temperature directly.');
   if (s.planet.massMjup || s.planet.massMearth) {
-    lines.push(`Mass effects: limb darkening u ${describeDist(a.limbDarkening)}, gravity darkening g ${describeDist(a.gravityDarkening)} (typical values).`);
+    const u = a.limbDarkening ? `u ${describeDist(a.limbDarkening)} (given)` : 'u from the stellar Teff in the band (gray Eddington atmosphere)';
+    const g = a.gravityDarkening ? `g ${describeDist(a.gravityDarkening)} (given)` : 'g from the stellar Teff in the band (von Zeipel 1924 / Lucy 1967 exponents)';
+    lines.push(`Mass effects: limb darkening ${u}, gravity darkening ${g}; the predicted ellipsoidal and beaming amplitudes carry a ${Math.round(100 * MASS_MODEL_FRACTION)} % model uncertainty where they meet measured ones (common practice; measured and predicted ellipsoidal amplitudes of hot Jupiters scatter by about this much).`);
   }
   lines.push(...s.notes);
   return lines;

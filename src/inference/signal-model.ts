@@ -14,7 +14,8 @@
 import type { Band } from '../physics/bandpass.ts';
 import { bandFlux, getBandTable } from '../physics/bandpass.ts';
 import { TABLE_MIN_K, denseFluxTable, type BandTable, type DenseFluxTable } from '../physics/band-table.ts';
-import { beamingAmplitude, ellipsoidalAmplitude, rvSemiAmplitudeMs } from '../physics/mass-effects.ts';
+import { darkeningCoefficients } from '../physics/darkening.ts';
+import { GRAVITY_DARKENING_RANGE, beamingAmplitude, ellipsoidalAmplitude, rvSemiAmplitudeMs } from '../physics/mass-effects.ts';
 import { lambertPhaseFunction } from '../physics/reflection.ts';
 import { localEquilibriumFactorAt, localEquilibriumTable, type LocalEquilibriumTable } from '../physics/local-equilibrium.ts';
 import { daysideTemperatureK, nightsideTemperatureK } from '../physics/temperature.ts';
@@ -138,9 +139,16 @@ export function thermalRatio(dm: DrawModel, m: ModelSettings, tK: number): numbe
 export function predictMassEffects(n: Nuisance, band: Band): MassPrediction | undefined {
   if (n.planetMassKg === undefined || n.starMassKg === undefined || n.periodS === undefined) return undefined;
   const k = rvSemiAmplitudeMs(n.periodS, n.planetMassKg, n.starMassKg, n.inclinationRad);
+  let u = n.limbDarkeningU;
+  let g = n.gravityDarkeningG;
+  if (Number.isNaN(u) || Number.isNaN(g)) {
+    const d = darkeningCoefficients(band, n.teffK);
+    if (Number.isNaN(u)) u = d.u;
+    if (Number.isNaN(g)) g = Math.min(GRAVITY_DARKENING_RANGE[1], d.g);
+  }
   return {
     rvSemiAmplitudeMs: k,
     beamingPpm: beamingAmplitude(n.teffK, band, k) * 1e6,
-    ellipsoidalPpm: ellipsoidalAmplitude(n.planetMassKg, n.starMassKg, n.scaledSemiMajorAxis, n.inclinationRad, n.limbDarkeningU, n.gravityDarkeningG) * 1e6,
+    ellipsoidalPpm: ellipsoidalAmplitude(n.planetMassKg, n.starMassKg, n.scaledSemiMajorAxis, n.inclinationRad, u, g) * 1e6,
   };
 }

@@ -69,8 +69,8 @@ export const assumptionsSchema = z
     redistribution: parameterQuantity.default({ min: 0, max: 1 }).describe('Heat-redistribution efficiency eps in [0, 1].'),
     phaseIntegral: parameterQuantity.default({ ...DEFAULT_PHASE_INTEGRAL })
       .describe(`Phase integral q; A_B = q A_g. Default uniform on [${DEFAULT_PHASE_INTEGRAL.min}, ${DEFAULT_PHASE_INTEGRAL.max}]: from below conservative Rayleigh scattering (1.25) past the Lambert sphere (1.5) to semi-infinite isotropic scatterers with single-scattering albedo 0.5 (1.61).`),
-    limbDarkening: parameterQuantity.default({ min: 0.45, max: 0.75 }).describe('Linear limb-darkening coefficient u of the star (typical values).'),
-    gravityDarkening: parameterQuantity.default({ min: 0.3, max: 0.4 }).describe('Gravity-darkening coefficient g of the star (typical values).'),
+    limbDarkening: parameterQuantity.optional().describe("Linear limb-darkening coefficient u of the star in the band; default: from the stellar Teff in the band (gray Eddington atmosphere), with the ellipsoidal prediction's model uncertainty."),
+    gravityDarkening: parameterQuantity.optional().describe("Gravity-darkening coefficient g of the star in the band; default: from the stellar Teff in the band (von Zeipel 1924 for radiative, Lucy 1967 for convective envelopes)."),
     planetClass: z.enum(['auto', 'giant', 'rocky']).default('auto').describe('Planet class for the cloud-free ceiling; auto decides from the radius.'),
     userEntryTemperature: z.enum(['window', 'condensation']).default('window')
       .describe("For your own catalog entries that give both a temperature window and a condensing species: test the planet's temperature against the entry's window (default) or against the species' condensation curve."),
