@@ -77,7 +77,7 @@ export function runCorners(
   const subset = draws.slice(0, count);
   const runs = sensitivityCorners(s).map((corner, c) => {
     const fixed = subset.map((th) => withCorner(th, corner.redistribution, corner.phaseIntegral));
-    const grid = runGrid(fixed, settings, lik, nodes);
+    const grid = runGrid(fixed, settings, lik, nodes, false);
     if (!grid.weights.some((w) => w > 0)) return { corner, grid, albedo: summarize([NaN]) };
     const post = samplePosterior(grid, settings, createRng(seed * 7919 + 101 + c), count);
     return { corner, grid, albedo: summarize(post.geometricAlbedo) };
@@ -118,7 +118,7 @@ export function runDayMapShift(
   const alternative = settings.dayMap === 'uniform' ? 'local-equilibrium' : 'uniform';
   const albedoUnder = (dayMap: ModelSettings['dayMap'], c: number) => {
     const m = { ...settings, dayMap };
-    const grid = runGrid(subset, m, lik, nodes);
+    const grid = runGrid(subset, m, lik, nodes, false);
     if (!grid.weights.some((w) => w > 0)) return summarize([NaN]);
     return summarize(samplePosterior(grid, m, createRng(seed * 7919 + 211 + c), count).geometricAlbedo);
   };

@@ -66,7 +66,12 @@ export function lnAlbedoFactors(nodes: number): Float64Array {
   return c;
 }
 
-export function runGrid(draws: Nuisance[], settings: ModelSettings, lik: Likelihoods, nodes: number): GridResult {
+/**
+ * `withMasses`: predict the mass effects of every draw (needed for the reported mass
+ * effects and when ellipsoidal or beaming amplitudes are measured; the sensitivity grids
+ * skip it otherwise).
+ */
+export function runGrid(draws: Nuisance[], settings: ModelSettings, lik: Likelihoods, nodes: number, withMasses = true): GridResult {
   const n = draws.length;
   const rows = new Float64Array(n * nodes);
   const cells = new Float64Array(n * (nodes - 1));
@@ -100,7 +105,7 @@ export function runGrid(draws: Nuisance[], settings: ModelSettings, lik: Likelih
     const th = draws[i]!;
     const dm = drawModel(th, settings);
     models[i] = dm;
-    const mp = predictMassEffects(th, settings.band);
+    const mp = withMasses || lik.ellipsoidalAmplitudePpm || lik.beamingAmplitudePpm ? predictMassEffects(th, settings.band) : undefined;
     masses[i] = mp;
     let constant = 0;
     if (mp && lik.ellipsoidalAmplitudePpm) constant += lik.ellipsoidalAmplitudePpm.at(mp.ellipsoidalPpm);

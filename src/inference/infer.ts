@@ -24,6 +24,9 @@ import { quantileSorted, roundSig, summarize } from './summary.ts';
 import type { AlbedoPosterior, InferenceResult, MassEffects, PosteriorQuantiles } from './types.ts';
 import { posteriorWarnings } from './warnings.ts';
 
+/** Thermal share (95 % upper limit) below which the dayside-map comparison is skipped. */
+export const DAY_MAP_MIN_THERMAL_SHARE = 0.01;
+
 export interface InferOptions {
   samples?: number;
   gridNodes?: number;
@@ -110,7 +113,8 @@ export function inferAlbedoDetailed(s: SystemInput, options: InferOptions = {}):
 
   const draws: Nuisance[] = new Array(samples);
   for (let i = 0; i < samples; i++) draws[i] = drawNuisance(s, rng);
-  const lik = likelihoodsOf(s, massScaleOf(draws, settings.band));
+  const massMeasured = s.measurements.ellipsoidalAmplitudePpm !== undefined || s.measurements.beamingAmplitudePpm !== undefined;
+  const lik = likelihoodsOf(s, massMeasured ? massScaleOf(draws, settings.band) : undefined);
   const grid = runGrid(draws, settings, lik, nodes);
   if (!grid.weights.some((w) => w > 0)) {
     throw new HesperError('no-posterior-support', 'no draw reproduces the measurements', [
@@ -125,7 +129,9 @@ export function inferAlbedoDetailed(s: SystemInput, options: InferOptions = {}):
   const detected = [m.eclipseDepthPpm, m.phaseAmplitudePpm].some((d) => d !== undefined && significanceSigma(d) >= 3);
   const corners = runCorners(s, draws, settings, lik, seed, grid);
   const nuisance = nuisancePosterior(draws, post.drawIndex);
-  const dayMapShift = runDayMapShift(s, draws, settings, lik, seed);
+  // The dayside map only reshapes the thermal term: when it is below 1 % of the signal at
+  // 95 % (our choice), the map cannot move A_g noticeably and the comparison is skipped.
+  const dayMapShift = thermalFraction.upperLimit95 >= DAY_MAP_MIN_THERMAL_SHARE ? runDayMapShift(s, draws, settings, lik, seed) : undefined;
   const agGrid = quantileGrid(post.geometricAlbedo);
   const agSummary = summarize(post.geometricAlbedo);
   const constraint = readConstraint(agGrid, agSummary.lower68, agSummary.upper68, corners.rows);

@@ -15,10 +15,13 @@ export interface NuisancePosterior {
 }
 
 export function nuisancePosterior(draws: readonly Nuisance[], drawIndex: Int32Array): NuisancePosterior {
-  const pick = (key: 'redistribution' | 'phaseIntegral') => ({
-    prior: summarize(draws.map((d) => d[key])),
-    posterior: summarize(Array.from(drawIndex, (i) => draws[i]![key])),
-  });
+  const pick = (key: 'redistribution' | 'phaseIntegral') => {
+    const prior = new Float64Array(draws.length);
+    for (let i = 0; i < draws.length; i++) prior[i] = draws[i]![key];
+    const posterior = new Float64Array(drawIndex.length);
+    for (let k = 0; k < drawIndex.length; k++) posterior[k] = prior[drawIndex[k]!]!;
+    return { prior: summarize(prior), posterior: summarize(posterior) };
+  };
   return { redistribution: pick('redistribution'), phaseIntegral: pick('phaseIntegral') };
 }
 
