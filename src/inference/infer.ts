@@ -12,7 +12,7 @@ import { assumptionLines } from './assumptions.ts';
 import { effectiveSampleSize, runGrid } from './grid.ts';
 import { significanceSigma } from './likelihood.ts';
 import { checkConsistency } from './consistency.ts';
-import { readConstraint } from './constraint.ts';
+import { conditionalSpread, readConstraint } from './constraint.ts';
 import { runCorners, runDayMapShift } from './corners.ts';
 import { drawMeasurement, likelihoodsOf, type MassPredictionScale } from './measurements.ts';
 import { type Nuisance, drawNuisance } from './nuisance.ts';
@@ -134,7 +134,10 @@ export function inferAlbedoDetailed(s: SystemInput, options: InferOptions = {}):
   const dayMapShift = thermalFraction.upperLimit95 >= DAY_MAP_MIN_THERMAL_SHARE ? runDayMapShift(s, draws, settings, lik, seed) : undefined;
   const agGrid = quantileGrid(post.geometricAlbedo);
   const agSummary = summarize(post.geometricAlbedo);
-  const constraint = readConstraint(agGrid, agSummary.lower68, agSummary.upper68, corners.rows);
+  // The posterior's own dependence on the heat redistribution (the thermal-reflection degeneracy); q enters
+  // through the corners, since a bright planet's q dependence is the energy bound A_g <= 1/q, not the data.
+  const epsSpread = conditionalSpread(Float64Array.from(draws, (d) => d.redistribution), post.drawIndex, post.geometricAlbedo);
+  const constraint = readConstraint(agGrid, agSummary.lower68, agSummary.upper68, corners.rows, epsSpread);
   const consistency = checkConsistency({
     system: s, grid, posterior: post, corners: corners.rows, bestLogLikelihood: Math.max(grid.maxLogLikelihood, corners.maxLogLikelihood),
   });

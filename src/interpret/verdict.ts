@@ -113,7 +113,8 @@ export function decideVerdict(
     entriesConsidered: pool.length,
     temperatureTested: true,
   };
-  const p = probabilityAbove(geometricAlbedoGrid, top);
+  // Rounded once, so the JSON, the reason and the report print the same probability.
+  const p = Number(probabilityAbove(geometricAlbedoGrid, top).toFixed(3));
   const ceil = fmtAlbedo(top);
   const others = pool.length > 1 ? ` (the brightest of ${pool.length} regimes this planet may be in)` : '';
   const what = `the cloud-free reference is ${chosen.entry.name} [${regime}], A_g up to ${ceil}${others}`;
@@ -139,7 +140,7 @@ export function decideVerdict(
   }
   return {
     cloudsOrIceRequired: answer,
-    probability: Number(p.toFixed(4)),
+    probability: p,
     reason: `${sentence}; ${what}${bandNote}${skipNote}; ${planetClass.text}`,
     ceiling,
     reference,

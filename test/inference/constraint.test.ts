@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { reachesZero, readConstraint } from '../../src/inference/constraint.ts';
+import { conditionalSpread, reachesZero, readConstraint } from '../../src/inference/constraint.ts';
 import { inferAlbedo } from '../../src/inference/infer.ts';
 import { summarize } from '../../src/inference/summary.ts';
 import type { SensitivityRow } from '../../src/inference/types.ts';
@@ -46,6 +46,20 @@ describe('the albedo constraint states', () => {
     // A corner the data rule out does not count.
     expect(readConstraint(g, 3, 5, [corner(3.9), corner(4.1), corner(9, true)]).constraint).toBe('measured');
     expect(readConstraint(truncatedNormalGrid(1), 0.3, 1.8, [corner(0.9), corner(1.1)]).constraint).toBe('upper-limit');
+  });
+
+  it('reads the posterior\'s own dependence on eps', () => {
+    // Invented: 900 prior draws with eps = k/899; posterior draws pick every draw once.
+    const eps = Float64Array.from({ length: 900 }, (_, k) => k / 899);
+    const index = Int32Array.from({ length: 900 }, (_, k) => k);
+    // derived: A_g = 0.4 eps gives medians 0.4/6 and 0.4 x 5/6 in the bottom and top thirds: spread 0.267.
+    expect(conditionalSpread(eps, index, Float64Array.from(eps, (e) => 0.4 * e))!).toBeCloseTo(0.2667, 2);
+    expect(conditionalSpread(eps, index, Float64Array.from(eps, () => 0.3))!).toBe(0);
+    // A spread above half the 68 % width makes the albedo prior-dominated even when the corners agree.
+    expect(readConstraint(truncatedNormalGrid(4), 3, 5, [corner(3.9), corner(4.1)], 1.2).constraint).toBe('prior-dominated');
+    expect(readConstraint(truncatedNormalGrid(4), 3, 5, [corner(3.9), corner(4.1)], 0.8).constraint).toBe('measured');
+    // When the data pin eps to one third, the comparison is skipped.
+    expect(conditionalSpread(eps, Int32Array.from({ length: 300 }, (_, k) => k), Float64Array.from({ length: 300 }, () => 0.1))).toBeNull();
   });
 
   it('keeps `detected` for the eclipse signal and reports reflected light separately', () => {
