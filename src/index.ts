@@ -25,8 +25,10 @@ export {
   interpretPosterior, interpretSystem, interpretSystemDetailed, type DetailedInterpretation, type Interpretation, type InterpretOptions,
 } from './interpret/run.ts';
 export type { CatalogData, Candidate } from './interpret/types.ts';
-export { inferAlbedo, SENSITIVITY_CORNERS } from './inference/infer.ts';
-export type { AlbedoPosterior, Diagnostics, MassEffects, SensitivityRow } from './inference/types.ts';
+export { inferAlbedo } from './inference/infer.ts';
+export { sensitivityCorners } from './inference/corners.ts';
+export type { AlbedoPosterior, AlbedoSummary, Diagnostics, MassEffects, ModelFit, SensitivityRow } from './inference/types.ts';
+export type { AlbedoConstraint } from './inference/constraint.ts';
 export type { Summary } from './inference/summary.ts';
 export { createRng, type Rng } from './inference/random.ts';
 

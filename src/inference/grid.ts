@@ -7,7 +7,7 @@
  */
 import type { Nuisance } from './nuisance.ts';
 import type { LogLikelihood } from './likelihood.ts';
-import { type DrawModel, type MassPrediction, type ModelSettings, drawModel, planetDenseTable, predictMassEffects, thermalRatioRow } from './signal-model.ts';
+import { type DrawModel, type MassPrediction, type ModelSettings, applyDayMap, dayMapTable, drawModel, planetDenseTable, predictMassEffects, thermalRatioRow } from './signal-model.ts';
 
 /** A bivariate Gaussian likelihood of (eclipse depth, phase amplitude) with correlated errors. */
 export interface DepthAmplitudeJoint {
@@ -44,9 +44,19 @@ export interface GridResult {
   weights: Float64Array;
   /** Whether the model eclipse depth decreases somewhere along the grid, per draw. */
   depthFalls: Uint8Array;
-  /** Largest model eclipse depth and phase amplitude over all draws and nodes [ppm]. */
+  /** Largest and smallest model eclipse depth and phase amplitude over all draws and nodes [ppm]. */
   maxDepthPpm: number;
   maxAmplitudePpm: number;
+  minDepthPpm: number;
+  minAmplitudePpm: number;
+  /**
+   * Largest log-likelihood over all draws and nodes (the best fit anywhere in the prior;
+   * additive constants dropped as in likelihood.ts, so -2 x this is the minimum
+   * chi-square for Gaussian errors).
+   */
+  maxLogLikelihood: number;
+  /** ln of the prior-averaged likelihood (the evidence, same constants dropped). */
+  logEvidence: number;
 }
 
 /** ln of (1 - A_B)^(1/4) at the grid's Bond albedos A_B = j / (nodes - 1) (Cowan & Agol 2011 scaling). */
@@ -56,7 +66,12 @@ export function lnAlbedoFactors(nodes: number): Float64Array {
   return c;
 }
 
-export function runGrid(draws: Nuisance[], settings: ModelSettings, lik: Likelihoods, nodes: number): GridResult {
+/**
+ * `withMasses`: predict the mass effects of every draw (needed for the reported mass
+ * effects and when ellipsoidal or beaming amplitudes are measured; the sensitivity grids
+ * skip it otherwise).
+ */
+export function runGrid(draws: Nuisance[], settings: ModelSettings, lik: Likelihoods, nodes: number, withMasses = true): GridResult {
   const n = draws.length;
   const rows = new Float64Array(n * nodes);
   const cells = new Float64Array(n * (nodes - 1));
@@ -67,12 +82,16 @@ export function runGrid(draws: Nuisance[], settings: ModelSettings, lik: Likelih
   const lnC = lnAlbedoFactors(nodes);
   const factor = lnC.map(Math.exp);
   const table = planetDenseTable(settings);
+  const dayMap = dayMapTable(settings);
   const joint = lik.depthAmplitude;
   const needNight = lik.phaseAmplitudePpm !== undefined || lik.nightsideFluxPpm !== undefined || joint !== undefined;
   const depthRow = new Float64Array(nodes);
   const logL = new Float64Array(nodes);
   let maxDepthPpm = -Infinity;
   let maxAmplitudePpm = -Infinity;
+  let minDepthPpm = Infinity;
+  let minAmplitudePpm = Infinity;
+  let maxLogLikelihood = -Infinity;
   const inv = 1 / (nodes - 1);
 
   const dayRow = new Float64Array(nodes);
@@ -86,7 +105,7 @@ export function runGrid(draws: Nuisance[], settings: ModelSettings, lik: Likelih
     const th = draws[i]!;
     const dm = drawModel(th, settings);
     models[i] = dm;
-    const mp = predictMassEffects(th, settings.band, settings.star?.beamingFactor);
+    const mp = withMasses || lik.ellipsoidalAmplitudePpm || lik.beamingAmplitudePpm ? predictMassEffects(th, settings.band, settings.star?.beamingFactor) : undefined;
     masses[i] = mp;
     let constant = 0;
     if (mp && lik.ellipsoidalAmplitudePpm) constant += lik.ellipsoidalAmplitudePpm.at(mp.ellipsoidalPpm);
@@ -95,12 +114,14 @@ export function runGrid(draws: Nuisance[], settings: ModelSettings, lik: Likelih
     const invQ = 1 / th.phaseIntegral;
 
     thermalRatioRow(dm, table, dm.lnDayZeroK, lnC, dayRow);
+    if (dayMap) applyDayMap(dayMap, dm.lnDayZeroK, lnC, th.redistribution, dayRow);
     const perAg = 1e6 * dm.reflectedDepthPerAg * invQ;
     let prevDepth = -Infinity;
     for (let j = 0; j < nodes; j++) {
       const depth = agUnit[j]! * perAg + 1e6 * dayRow[j]!;
       depthRow[j] = depth;
       if (depth > maxDepthPpm) maxDepthPpm = depth;
+      if (depth < minDepthPpm) minDepthPpm = depth;
       if (depth < prevDepth) depthFalls[i] = 1;
       prevDepth = depth;
     }
@@ -114,6 +135,7 @@ export function runGrid(draws: Nuisance[], settings: ModelSettings, lik: Likelih
           const amplitude = agUnit[j]! * perAgAmp + (dayRow[j]! - nightRow[j]!) * thermalAmp;
           signal[j] = amplitude;
           if (amplitude > maxAmplitudePpm) maxAmplitudePpm = amplitude;
+          if (amplitude < minAmplitudePpm) minAmplitudePpm = amplitude;
         }
         if (phaseAmplitudePpm) phaseAmplitudePpm.accumulate(signal, logL, nodes);
         if (joint) {
@@ -138,6 +160,7 @@ export function runGrid(draws: Nuisance[], settings: ModelSettings, lik: Likelih
     let rowMax = -Infinity;
     for (let j = 0; j < nodes; j++) if (logL[j]! > rowMax) rowMax = logL[j]!;
     const base = i * nodes;
+    if (rowMax > maxLogLikelihood) maxLogLikelihood = rowMax;
     if (rowMax === -Infinity) {
       logZ[i] = -Infinity;
       continue;
@@ -161,7 +184,20 @@ export function runGrid(draws: Nuisance[], settings: ModelSettings, lik: Likelih
     trap -= 0.5 * (rows[base]! + rows[base + nodes - 1]!);
     logZ[i] = rowMax + Math.log(trap * inv);
   }
-  return { nodes, draws, models, masses, rows, cells, weights: normaliseLogWeights(logZ), depthFalls, maxDepthPpm, maxAmplitudePpm };
+  return {
+    nodes, draws, models, masses, rows, cells, weights: normaliseLogWeights(logZ), depthFalls,
+    maxDepthPpm, maxAmplitudePpm, minDepthPpm, minAmplitudePpm, maxLogLikelihood, logEvidence: logMeanExp(logZ),
+  };
+}
+
+/** ln of the mean of exp(logZ) (the prior average of the draws' evidences); -Infinity when none has support. */
+export function logMeanExp(logZ: Float64Array): number {
+  let max = -Infinity;
+  for (const v of logZ) if (v > max) max = v;
+  if (max === -Infinity) return -Infinity;
+  let sum = 0;
+  for (const v of logZ) sum += Math.exp(v - max);
+  return max + Math.log(sum / logZ.length);
 }
 
 /** exp(logZ - max) normalised to sum 1; all zeros if no draw has support. */

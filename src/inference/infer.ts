@@ -11,15 +11,22 @@ import type { SystemInput } from '../io/system.ts';
 import { assumptionLines } from './assumptions.ts';
 import { effectiveSampleSize, runGrid } from './grid.ts';
 import { significanceSigma } from './likelihood.ts';
-import { drawMeasurement, likelihoodsOf } from './measurements.ts';
-import { type Nuisance, drawNuisance, withCorner } from './nuisance.ts';
+import { checkConsistency } from './consistency.ts';
+import { conditionalSpread, readConstraint } from './constraint.ts';
+import { runCorners, runDayMapShift } from './corners.ts';
+import { drawMeasurement, likelihoodsOf, type MassPredictionScale } from './measurements.ts';
+import { type Nuisance, drawNuisance } from './nuisance.ts';
+import { nuisancePosterior, phaseIntegralSentence } from './nuisance-posterior.ts';
 import { createRng, type Rng } from './random.ts';
 import { samplePosterior } from './sample-posterior.ts';
-import type { ModelSettings } from './signal-model.ts';
+import { type ModelSettings, predictMassEffects } from './signal-model.ts';
 import { starFactors } from './star-model.ts';
 import { quantileSorted, roundSig, summarize } from './summary.ts';
-import type { AlbedoPosterior, InferenceResult, MassEffects, PosteriorQuantiles, SensitivityRow } from './types.ts';
+import type { AlbedoPosterior, InferenceResult, MassEffects, PosteriorQuantiles } from './types.ts';
 import { posteriorWarnings } from './warnings.ts';
+
+/** Thermal share (95 % upper limit) below which the dayside-map comparison is skipped. */
+export const DAY_MAP_MIN_THERMAL_SHARE = 0.01;
 
 export interface InferOptions {
   samples?: number;
@@ -29,17 +36,13 @@ export interface InferOptions {
   rng?: Rng;
 }
 
-/** Corners of the sensitivity table: no / full redistribution x q = 1 / 1.5 (Lambert). */
-export const SENSITIVITY_CORNERS: ReadonlyArray<{ redistribution: number; phaseIntegral: number }> = [
-  { redistribution: 0, phaseIntegral: 1 },
-  { redistribution: 0, phaseIntegral: 1.5 },
-  { redistribution: 1, phaseIntegral: 1 },
-  { redistribution: 1, phaseIntegral: 1.5 },
-];
-
 function settingsOf(s: SystemInput): ModelSettings {
   const star = starFactors(s);
-  return { band: s.band, weighting: s.assumptions.weighting, thermal: s.assumptions.thermal !== 'none', ...(star ? { star } : {}) };
+  return {
+    band: s.band, weighting: s.assumptions.weighting, thermal: s.assumptions.thermal !== 'none',
+    dayMap: s.assumptions.thermal === 'local-equilibrium' ? 'local-equilibrium' : 'uniform',
+    ...(star ? { star } : {}),
+  };
 }
 
 function allReflected(s: SystemInput, draws: Nuisance[], rng: Rng) {
@@ -57,21 +60,19 @@ function allReflected(s: SystemInput, draws: Nuisance[], rng: Rng) {
   return summarize(values);
 }
 
-function sensitivity(s: SystemInput, draws: Nuisance[], settings: ModelSettings, seed: number): SensitivityRow[] {
-  const lik = likelihoodsOf(s);
-  // A sixteenth of the draws (at least 250): enough for the medians and intervals of a
-  // sensitivity table, at a fraction of the main grid's cost.
-  const count = Math.max(250, Math.floor(draws.length / 16));
-  const subset = draws.slice(0, count);
-  return SENSITIVITY_CORNERS.map((corner, c) => {
-    const fixed = subset.map((th) => withCorner(th, corner.redistribution, corner.phaseIntegral));
-    const grid = runGrid(fixed, settings, lik, Math.max(64, Math.floor(s.assumptions.gridNodes / 4)));
-    if (!grid.weights.some((w) => w > 0)) {
-      return { ...corner, geometricAlbedo: summarize([NaN]) };
-    }
-    const post = samplePosterior(grid, settings, createRng(seed * 7919 + 101 + c), count);
-    return { ...corner, geometricAlbedo: summarize(post.geometricAlbedo) };
-  });
+/** Median predicted mass-effect amplitudes over the first prior draws (the scale of their model uncertainty), when masses are known. */
+function massScaleOf(draws: Nuisance[], band: ModelSettings['band'], beamingFactor = 1): MassPredictionScale | undefined {
+  const e: number[] = [];
+  const b: number[] = [];
+  for (let i = 0; i < draws.length && e.length < 500; i++) {
+    const m = predictMassEffects(draws[i]!, band, beamingFactor);
+    if (!m) continue;
+    e.push(m.ellipsoidalPpm);
+    b.push(m.beamingPpm);
+  }
+  if (e.length === 0) return undefined;
+  const med = (v: number[]) => quantileSorted(Float64Array.from(v).sort(), 0.5);
+  return { ellipsoidalPpm: med(e), beamingPpm: med(b) };
 }
 
 function massEffectsOf(grid: ReturnType<typeof runGrid>, drawIndex: Int32Array): MassEffects | undefined {
@@ -115,7 +116,9 @@ export function inferAlbedoDetailed(s: SystemInput, options: InferOptions = {}):
 
   const draws: Nuisance[] = new Array(samples);
   for (let i = 0; i < samples; i++) draws[i] = drawNuisance(s, rng);
-  const grid = runGrid(draws, settings, likelihoodsOf(s), nodes);
+  const massMeasured = s.measurements.ellipsoidalAmplitudePpm !== undefined || s.measurements.beamingAmplitudePpm !== undefined;
+  const lik = likelihoodsOf(s, massMeasured ? massScaleOf(draws, settings.band, settings.star?.beamingFactor) : undefined);
+  const grid = runGrid(draws, settings, lik, nodes);
   if (!grid.weights.some((w) => w > 0)) {
     throw new HesperError('no-posterior-support', 'no draw reproduces the measurements', [
       { path: 'measurements', message: 'every model signal has zero likelihood under the measurements; check the values and their uncertainties' },
@@ -127,11 +130,25 @@ export function inferAlbedoDetailed(s: SystemInput, options: InferOptions = {}):
   const massEffects = massEffectsOf(grid, post.drawIndex);
   const m = s.measurements;
   const detected = [m.eclipseDepthPpm, m.phaseAmplitudePpm].some((d) => d !== undefined && significanceSigma(d) >= 3);
+  const corners = runCorners(s, draws, settings, lik, seed, grid);
+  const nuisance = nuisancePosterior(draws, post.drawIndex);
+  // The dayside map only reshapes the thermal term: when it is below 1 % of the signal at
+  // 95 % (our choice), the map cannot move A_g noticeably and the comparison is skipped.
+  const dayMapShift = thermalFraction.upperLimit95 >= DAY_MAP_MIN_THERMAL_SHARE ? runDayMapShift(s, draws, settings, lik, seed) : undefined;
+  const agGrid = quantileGrid(post.geometricAlbedo);
+  const agSummary = summarize(post.geometricAlbedo);
+  // The posterior's own dependence on the heat redistribution (the thermal-reflection degeneracy); q enters
+  // through the corners, since a bright planet's q dependence is the energy bound A_g <= 1/q, not the data.
+  const epsSpread = conditionalSpread(Float64Array.from(draws, (d) => d.redistribution), post.drawIndex, post.geometricAlbedo);
+  const constraint = readConstraint(agGrid, agSummary.lower68, agSummary.upper68, corners.rows, epsSpread);
+  const consistency = checkConsistency({
+    system: s, grid, posterior: post, corners: corners.rows, bestLogLikelihood: Math.max(grid.maxLogLikelihood, corners.maxLogLikelihood),
+  });
 
   const result: AlbedoPosterior = {
     name: s.name,
     band: { id: s.band.id, label: s.band.label, minNm: roundSig(s.band.minNm, 6), maxNm: roundSig(s.band.maxNm, 6), approximate: s.band.approximate, weighting: s.assumptions.weighting },
-    geometricAlbedo: summarize(post.geometricAlbedo),
+    geometricAlbedo: { ...agSummary, constraint: constraint.constraint },
     bondAlbedo: summarize(post.bondAlbedo),
     daysideTemperatureK: summarize(post.daysideTemperatureK),
     equilibriumTemperatureK: summarize(post.equilibriumTemperatureK),
@@ -140,14 +157,22 @@ export function inferAlbedoDetailed(s: SystemInput, options: InferOptions = {}):
     thermalFraction,
     allReflectedGeometricAlbedo: allReflected(s, draws, rng),
     detected,
-    sensitivity: sensitivity(s, draws, settings, seed),
+    reflectedLightDetected: constraint.constraint === 'measured' && consistency.fit.reproducesData,
+    sensitivity: corners.rows,
+    ...(dayMapShift ? { thermalMapSensitivity: dayMapShift } : {}),
+    modelFit: consistency.fit,
+    nuisancePosterior: nuisance,
+    phaseIntegralPreference: phaseIntegralSentence(nuisance),
     ...(massEffects ? { massEffects } : {}),
     assumptions: assumptionLines(s),
     diagnostics: { effectiveSampleSize: roundSig(ess, 4), samples, gridNodes: nodes, seed, computeMs: 0 },
-    warnings: posteriorWarnings({ system: s, grid, posterior: post, thermalFraction, ...(massEffects ? { massEffects } : {}), effectiveSampleSize: ess }),
+    warnings: [
+      ...consistency.warnings,
+      ...posteriorWarnings({ system: s, grid, posterior: post, thermalFraction, ...(massEffects ? { massEffects } : {}), effectiveSampleSize: ess }),
+    ],
   };
   const quantiles: PosteriorQuantiles = {
-    geometricAlbedo: quantileGrid(post.geometricAlbedo),
+    geometricAlbedo: agGrid,
     daysideTemperatureK: quantileGrid(post.daysideTemperatureK),
     equilibriumTemperatureK: quantileGrid(post.equilibriumTemperatureK),
   };

@@ -20,6 +20,7 @@ export interface Nuisance {
   inclinationRad: number;
   redistribution: number;
   phaseIntegral: number;
+  /** The star's darkening coefficients in the band; NaN when derived from T_eff (physics/darkening.ts). */
   limbDarkeningU: number;
   gravityDarkeningG: number;
   /** Set when the planet and star masses and the period are known or derivable. */
@@ -89,8 +90,8 @@ export function drawNuisance(s: SystemInput, rng: Rng): Nuisance {
       inclinationRad,
       redistribution: d('assumptions.redistribution', a.redistribution, ASSUMPTION_FIELDS.redistribution.range)!,
       phaseIntegral: d('assumptions.phaseIntegral', a.phaseIntegral, ASSUMPTION_FIELDS.phaseIntegral.range)!,
-      limbDarkeningU: d('assumptions.limbDarkening', a.limbDarkening, ASSUMPTION_FIELDS.limbDarkening.range)!,
-      gravityDarkeningG: d('assumptions.gravityDarkening', a.gravityDarkening, ASSUMPTION_FIELDS.gravityDarkening.range)!,
+      limbDarkeningU: d('assumptions.limbDarkening', a.limbDarkening, ASSUMPTION_FIELDS.limbDarkening.range) ?? NaN,
+      gravityDarkeningG: d('assumptions.gravityDarkening', a.gravityDarkening, ASSUMPTION_FIELDS.gravityDarkening.range) ?? NaN,
       // Always present (undefined when unknown), so every draw has the same object shape
       // and the grid loop stays monomorphic.
       planetMassKg: undefined,

@@ -6,7 +6,8 @@
  */
 import type { GridResult } from './grid.ts';
 import type { Rng } from './random.ts';
-import { type ModelSettings, thermalRatio } from './signal-model.ts';
+import { localEquilibriumFactorAt } from '../physics/local-equilibrium.ts';
+import { type ModelSettings, dayMapTable, thermalRatio } from './signal-model.ts';
 
 export interface PosteriorDraws {
   count: number;
@@ -63,6 +64,7 @@ export function samplePosterior(grid: GridResult, settings: ModelSettings, rng: 
     reflectedDepthPpm: new Float64Array(count),
     thermalFraction: new Float64Array(count),
   };
+  const dayMap = dayMapTable(settings);
   for (let k = 0; k < count; k++) {
     const i = pickCumulative(cum, rng.uniform());
     const base = i * nodes;
@@ -74,7 +76,8 @@ export function samplePosterior(grid: GridResult, settings: ModelSettings, rng: 
     const ag = bond / th.phaseIntegral;
     const factor = Math.pow(1 - bond, 0.25);
     const tDay = dm.dayZeroK * factor;
-    const thermal = 1e6 * thermalRatio(dm, settings, tDay);
+    const uniform = 1e6 * thermalRatio(dm, settings, tDay);
+    const thermal = dayMap && uniform > 0 ? uniform * localEquilibriumFactorAt(dayMap, Math.log(tDay), th.redistribution) : uniform;
     const reflected = 1e6 * ag * dm.reflectedDepthPerAg;
     out.drawIndex[k] = i;
     out.geometricAlbedo[k] = ag;

@@ -14,8 +14,10 @@
 import type { Band } from '../physics/bandpass.ts';
 import { bandFlux, getBandTable } from '../physics/bandpass.ts';
 import { TABLE_MIN_K, denseFluxTable, type BandTable, type DenseFluxTable } from '../physics/band-table.ts';
-import { beamingAmplitude, ellipsoidalAmplitude, rvSemiAmplitudeMs } from '../physics/mass-effects.ts';
+import { darkeningCoefficients } from '../physics/darkening.ts';
+import { GRAVITY_DARKENING_RANGE, beamingAmplitude, ellipsoidalAmplitude, rvSemiAmplitudeMs } from '../physics/mass-effects.ts';
 import { lambertPhaseFunction } from '../physics/reflection.ts';
+import { localEquilibriumFactorAt, localEquilibriumTable, type LocalEquilibriumTable } from '../physics/local-equilibrium.ts';
 import { daysideTemperatureK, nightsideTemperatureK } from '../physics/temperature.ts';
 import type { Nuisance } from './nuisance.ts';
 
@@ -25,6 +27,20 @@ export interface ModelSettings {
   thermal: boolean;
   /** A tabulated stellar spectrum's factors on the blackbody star's band flux and beaming factor (absent: blackbody star). */
   star?: { fluxFactor: number; beamingFactor: number };
+  /** Dayside brightness map: uniform at T_day (default) or in local equilibrium (local-equilibrium.ts). */
+  dayMap: 'uniform' | 'local-equilibrium';
+}
+
+/** The local-equilibrium factor table of the settings, or undefined for a uniform dayside. */
+export function dayMapTable(m: ModelSettings): LocalEquilibriumTable | undefined {
+  return m.thermal && m.dayMap === 'local-equilibrium' ? localEquilibriumTable(planetTable(m)) : undefined;
+}
+
+/** Multiplies a dayside flux row by the local-equilibrium factor C(T_day, eps) (the row's T_day at ln T = lnT0 + lnFactor[j]). */
+export function applyDayMap(t: LocalEquilibriumTable, lnT0: number, lnFactor: Float64Array, redistribution: number, row: Float64Array): void {
+  for (let j = 0; j < lnFactor.length; j++) {
+    if (row[j]! > 0) row[j]! *= localEquilibriumFactorAt(t, lnT0 + lnFactor[j]!, redistribution);
+  }
 }
 
 /** The band-flux table of the settings, fetched once for the hot loop. */
@@ -126,9 +142,16 @@ export function thermalRatio(dm: DrawModel, m: ModelSettings, tK: number): numbe
 export function predictMassEffects(n: Nuisance, band: Band, beamingFactor = 1): MassPrediction | undefined {
   if (n.planetMassKg === undefined || n.starMassKg === undefined || n.periodS === undefined) return undefined;
   const k = rvSemiAmplitudeMs(n.periodS, n.planetMassKg, n.starMassKg, n.inclinationRad);
+  let u = n.limbDarkeningU;
+  let g = n.gravityDarkeningG;
+  if (Number.isNaN(u) || Number.isNaN(g)) {
+    const d = darkeningCoefficients(band, n.teffK);
+    if (Number.isNaN(u)) u = d.u;
+    if (Number.isNaN(g)) g = Math.min(GRAVITY_DARKENING_RANGE[1], d.g);
+  }
   return {
     rvSemiAmplitudeMs: k,
     beamingPpm: beamingAmplitude(n.teffK, band, k) * beamingFactor * 1e6,
-    ellipsoidalPpm: ellipsoidalAmplitude(n.planetMassKg, n.starMassKg, n.scaledSemiMajorAxis, n.inclinationRad, n.limbDarkeningU, n.gravityDarkeningG) * 1e6,
+    ellipsoidalPpm: ellipsoidalAmplitude(n.planetMassKg, n.starMassKg, n.scaledSemiMajorAxis, n.inclinationRad, u, g) * 1e6,
   };
 }

@@ -1,11 +1,32 @@
 /** The albedo posterior as reported in the interpretation JSON. */
+import type { AlbedoConstraint } from './constraint.ts';
+import type { DayMapShift } from './corners.ts';
+import type { NuisancePosterior } from './nuisance-posterior.ts';
 import type { Summary } from './summary.ts';
 
 export interface SensitivityRow {
   redistribution: number;
   phaseIntegral: number;
   geometricAlbedo: Summary;
+  /** 2 (ln L_best - ln L_corner) of the best fits (null when no draw fits at this corner). */
+  deltaChiSquare: number | null;
+  /** The data rule this corner out (Delta chi^2 above the 95 % point for two parameters). */
+  ruledOut: boolean;
 }
+
+/** Whether the model reproduces the data, with the best fit's chi-square and the problems found. */
+export interface ModelFit {
+  reproducesData: boolean;
+  /** -2 ln L of the best fit anywhere in the prior (a chi-square for Gaussian errors); null for sample or uniform measurements. */
+  chiSquareMin: number | null;
+  degreesOfFreedom: number;
+  pValue: number | null;
+  /** Why the model cannot reproduce the data, in words (empty when it can). */
+  problems: string[];
+}
+
+/** The albedo summary with how the data constrain it. */
+export type AlbedoSummary = Summary & { constraint: AlbedoConstraint };
 
 export interface MassEffects {
   ellipsoidalPpm: Summary;
@@ -24,7 +45,7 @@ export interface Diagnostics {
 export interface AlbedoPosterior {
   name: string;
   band: { id: string; label: string; minNm: number; maxNm: number; approximate: boolean; weighting: 'photon' | 'energy' };
-  geometricAlbedo: Summary;
+  geometricAlbedo: AlbedoSummary;
   bondAlbedo: Summary;
   daysideTemperatureK: Summary;
   equilibriumTemperatureK: Summary;
@@ -32,8 +53,18 @@ export interface AlbedoPosterior {
   reflectedDepthPpm: Summary;
   thermalFraction: Summary;
   allReflectedGeometricAlbedo: Summary;
+  /** The eclipse depth or phase amplitude is at least 3 sigma (the signal, not the albedo). */
   detected: boolean;
+  /** Reflected light is detected: the albedo constraint is "measured". */
+  reflectedLightDetected: boolean;
   sensitivity: SensitivityRow[];
+  /** A_g under the other dayside map (uniform vs local equilibrium), on the corner draws; absent without thermal emission. */
+  thermalMapSensitivity?: DayMapShift;
+  modelFit: ModelFit;
+  /** Prior and posterior of eps and q. */
+  nuisancePosterior: NuisancePosterior;
+  /** Which phase integral the data prefer, if any, in words. */
+  phaseIntegralPreference: string;
   massEffects?: MassEffects;
   /** The assumptions that drove the result, in words. */
   assumptions: string[];

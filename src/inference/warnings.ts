@@ -1,4 +1,4 @@
-/** Warnings users need when reading an albedo posterior (signals the model cannot reach, a dominant thermal share, mass effects, sampling). */
+/** Warnings users need when reading an albedo posterior (a dominant thermal share, a depth that falls with A_g, mass effects, sampling); the range and fit checks are in consistency.ts. */
 import type { SystemInput } from '../io/system.ts';
 import { bandRangeNm } from './assumptions.ts';
 import type { GridResult } from './grid.ts';
@@ -7,7 +7,6 @@ import type { PosteriorDraws } from './sample-posterior.ts';
 import type { MassEffects } from './types.ts';
 import type { Summary } from './summary.ts';
 
-const CAUSES = 'likely causes: a mis-measured depth or amplitude, an inflated radius ratio, emission that is not a blackbody (e.g. strong band emission), or internal heat';
 const fmt = (x: number, d = 1) => x.toFixed(d);
 
 export interface WarningInput {
@@ -19,22 +18,15 @@ export interface WarningInput {
   effectiveSampleSize: number;
 }
 
+/** Effective sample size below which the intervals are unstable: the larger of 200 and 5 % of the draws (our choice). */
+export function essFloor(draws: number): number {
+  return Math.max(200, 0.05 * draws);
+}
+
 export function posteriorWarnings(w: WarningInput): string[] {
   const out: string[] = [];
   const { system: s, grid } = w;
   const m = s.measurements;
-  if (m.eclipseDepthPpm) {
-    const { centre, width } = centreAndWidth(m.eclipseDepthPpm);
-    if (centre - 2 * width > grid.maxDepthPpm) {
-      out.push(`The measured eclipse depth (${fmt(centre)} +- ${fmt(width)} ppm) is larger than any reflection plus thermal emission can give for this system (at most ${fmt(grid.maxDepthPpm)} ppm over all draws, at A_B = q A_g <= 1); ${CAUSES}.`);
-    }
-  }
-  if (m.phaseAmplitudePpm) {
-    const { centre, width } = centreAndWidth(m.phaseAmplitudePpm);
-    if (centre - 2 * width > grid.maxAmplitudePpm) {
-      out.push(`The measured phase amplitude (${fmt(centre)} +- ${fmt(width)} ppm) is larger than any reflection plus thermal emission can give for this system (at most ${fmt(grid.maxAmplitudePpm)} ppm over all draws); ${CAUSES}.`);
-    }
-  }
   if (w.thermalFraction.median > 0.5) {
     out.push(`Thermal emission makes up ${fmt(100 * w.thermalFraction.median, 0)} % (median) of the eclipse depth: the albedo rests on the thermal model (blackbody planet, two-hemisphere heat redistribution) more than on the measurement.`);
   }
@@ -52,8 +44,9 @@ export function posteriorWarnings(w: WarningInput): string[] {
     if (amp > 0 && b > 0.2 * amp) out.push(`The predicted Doppler beaming (peak-to-trough ${fmt(b)} ppm) exceeds 20 % of the measured phase amplitude (${fmt(amp)} ppm): make sure the amplitude is the planet's term alone.`);
   }
   const n = grid.draws.length;
-  if (w.effectiveSampleSize < Math.max(200, 0.05 * n)) {
-    out.push(`Low effective sample size (${fmt(w.effectiveSampleSize, 0)} of ${n} draws): the measurements constrain the nuisance parameters strongly; raise assumptions.samples for stable intervals.`);
+  const floor = essFloor(n);
+  if (w.effectiveSampleSize < floor) {
+    out.push(`Low effective sample size (${fmt(w.effectiveSampleSize, 0)} of ${n} draws, below the floor of ${fmt(floor, 0)}: the larger of 200 and 5 % of the draws): the measurements constrain the nuisance parameters strongly, or hardly any draw reproduces them; raise assumptions.samples for stable intervals, and check the inputs if it stays this low.`);
   }
   if (s.band.approximate) {
     out.push(`The band "${s.band.id}" is approximated (${bandRangeNm(s.band)} nm, shape from its coverage only); give a tabulated response curve for precise thermal estimates.`);

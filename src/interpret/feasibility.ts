@@ -9,6 +9,11 @@
  *   condenses the species deeper than 1 bar, below the gas seen (marginal: cold trap).
  *   The planet's metallicity is taken equal to the star's.
  * - Other entries: their temperature window [temperatureMinK, temperatureMaxK].
+ * - A user entry with both a window and a condensing species keeps its own window
+ *   unless assumptions.userEntryTemperature is "condensation"; the reason says which
+ *   test applied.
+ * - An entry with neither a curve nor a window is "untested": it cannot be shown to
+ *   exist at this planet's temperature, and is never described as forming there.
  * Grades: excluded when neither T_day nor T_eq lies inside with probability >= 2.5 %;
  * marginal when only T_eq does (the dayside seen at eclipse is too hot or too cold,
  * cooler or warmer regions may still allow it) or T_day does with < 16 %; ok otherwise.
@@ -32,6 +37,8 @@ export interface FeasibilityContext {
   metallicityDex: number;
   daysideK: Float64Array;
   equilibriumK: Float64Array;
+  /** For user entries with both a window and a species: which test applies (default: the entry's own window). */
+  userEntryTemperature?: 'window' | 'condensation';
 }
 
 export function curveMap(curves: readonly CondensateCurve[] = []): Map<string, CondensateCurve> {
@@ -128,7 +135,10 @@ function windowCheck(entry: CatalogEntry, ctx: FeasibilityContext): TemperatureC
     hi = point * (1 + POINT_WINDOW_TOLERANCE);
   }
   if (lo === null && hi === null) {
-    return { kind: 'none', rangeK: [null, null], probabilityDayside: 1, probabilityEquilibrium: 1, grade: 'ok', text: 'temperature: no limits in the catalog' };
+    return {
+      kind: 'none', rangeK: [null, null], probabilityDayside: null, probabilityEquilibrium: null, grade: 'untested',
+      text: 'temperature untested: the catalog gives this entry neither a temperature window nor a condensation curve, so it cannot be shown to exist at this planet\'s temperature',
+    };
   }
   const pDay = probIn(ctx.daysideK, lo, hi);
   const pEq = probIn(ctx.equilibriumK, lo, hi);
@@ -147,10 +157,20 @@ function windowCheck(entry: CatalogEntry, ctx: FeasibilityContext): TemperatureC
   return { ...base, grade: 'ok', text: `temperature: applies ${window}, ${day}` };
 }
 
+const hasWindow = (e: CatalogEntry) => e.temperatureMinK !== null || e.temperatureMaxK !== null;
+
 export function checkTemperature(entry: CatalogEntry, ctx: FeasibilityContext): TemperatureCheck {
   if (entry.condensate) {
     const range = condensationRangeK(entry.condensate, ctx);
-    if (range) return condensationCheck(entry.condensate, range, ctx);
+    if (range) {
+      const userWindow = entry.origin === 'user' && hasWindow(entry);
+      if (userWindow && (ctx.userEntryTemperature ?? 'window') === 'window') {
+        const w = windowCheck(entry, ctx);
+        return { ...w, text: `${w.text} (the entry's own temperature window applied, not the ${entry.condensate} condensation curve; assumptions.userEntryTemperature = "condensation" uses the curve)` };
+      }
+      const c = condensationCheck(entry.condensate, range, ctx);
+      return userWindow ? { ...c, text: `${c.text} (the ${entry.condensate} condensation curve applied, as assumptions.userEntryTemperature asks, not the entry's own window)` } : c;
+    }
   }
   return windowCheck(entry, ctx);
 }

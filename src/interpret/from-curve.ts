@@ -7,6 +7,7 @@
  */
 import type { Dist } from '../io/distribution.ts';
 import type { SystemInput } from '../io/system.ts';
+import { MASS_MODEL_FRACTION } from '../inference/measurements.ts';
 import { drawNuisance } from '../inference/nuisance.ts';
 import { createRng } from '../inference/random.ts';
 import { predictMassEffects } from '../inference/signal-model.ts';
@@ -28,14 +29,15 @@ function median(values: number[]): number {
   return s[Math.floor(s.length / 2)]!;
 }
 
+/** Mean and spread of the prior predictions, the spread widened by the prediction's fractional model uncertainty (MASS_MODEL_FRACTION). */
 function meanSigma(values: number[]): ValueSigma {
   const n = values.length;
   const mean = values.reduce((a, b) => a + b, 0) / n;
   const sd = Math.sqrt(values.reduce((a, b) => a + (b - mean) ** 2, 0) / Math.max(1, n - 1));
-  return { value: mean, sigma: sd };
+  return { value: mean, sigma: Math.hypot(sd, MASS_MODEL_FRACTION * Math.abs(mean)) };
 }
 
-/** Geometry (medians of the prior draws) and predicted mass signals (mean and spread) of a system. */
+/** Geometry (medians of the prior draws) and predicted mass signals (mean, and spread including the model uncertainty) of a system. */
 export function predictFromSystem(system: SystemInput, seed = system.assumptions.seed): SystemPrediction {
   const rng = createRng(seed);
   const draws = Array.from({ length: PRIOR_DRAWS }, () => drawNuisance(system, rng));

@@ -5,10 +5,12 @@
  * and given a status with readable reasons:
  * - albedo: excluded when the interval misses the 95 % interval, marginal when it
  *   misses the 68 % interval only, consistent when it meets the 68 % interval;
- * - temperature: see feasibility.ts; band: no or barely overlapping bands are marginal;
+ * - temperature: see feasibility.ts (an entry without limits is untested, never consistent);
+ *   band: no or barely overlapping bands are marginal;
  * - surface: a surface (rock, lava, regolith, soil, vegetation, ocean, metal, ice) is
  *   excluded on a gas-rich planet, which shows no surface (planet-class.ts).
- * The status is the worst of the three. Entries are ranked by status, then by the
+ * The status is the worst of the three, in the order consistent < marginal < untested <
+ * excluded. Entries are ranked by status, then by the
  * posterior probability of A_g inside the entry's interval.
  */
 import type { CatalogEntry } from '../catalog/index.ts';
@@ -59,7 +61,7 @@ export function fmtRange(lo: number, hi: number): string {
   return a === b ? a : `${a}-${b}`;
 }
 
-const RANK: Record<CandidateStatus, number> = { consistent: 0, marginal: 1, excluded: 2 };
+const RANK: Record<CandidateStatus, number> = { consistent: 0, marginal: 1, untested: 2, excluded: 3 };
 const worst = (...s: CandidateStatus[]): CandidateStatus => s.reduce((a, b) => (RANK[b] > RANK[a] ? b : a), 'consistent');
 
 function albedoVerdict(range: [number, number], s: Summary): { status: CandidateStatus; text: string } {

@@ -34,7 +34,7 @@ export function requiredSingleScatteringAlbedo(ag: Summary, matched: readonly Ma
     withinRange: m.entry.valueMax >= need && m.entry.valueMin <= hi.singleScatteringAlbedo,
     status: m.candidate.status,
   });
-  const rank = { consistent: 0, marginal: 1, excluded: 2 } as const;
+  const rank = { consistent: 0, marginal: 1, untested: 2, excluded: 3 } as const;
   const reachedBy = particles
     .filter((m) => m.entry.valueMax >= need)
     .map(reach)

@@ -54,11 +54,12 @@ export function interpretPosterior(s: SystemInput, posterior: AlbedoPosterior, q
       metallicityDex: s.star.metallicityDex,
       daysideK: quantiles.daysideTemperatureK,
       equilibriumK: quantiles.equilibriumTemperatureK,
+      userEntryTemperature: s.assumptions.userEntryTemperature,
     },
   });
   const verdict: Verdict = catalog
-    ? decideVerdict(matched, quantiles.geometricAlbedo, planetClass)
-    : { cloudsOrIceRequired: 'inconclusive', probability: null, reason: `no catalog data were given, so there is no cloud-free ceiling to compare with; ${planetClass.text}`, ceiling: null, planetClass };
+    ? decideVerdict(matched, quantiles.geometricAlbedo, planetClass, { constraint: posterior.geometricAlbedo.constraint, reproducesData: posterior.modelFit.reproducesData })
+    : { cloudsOrIceRequired: 'inconclusive', probability: null, reason: `no catalog data were given, so there is no cloud-free ceiling to compare with; ${planetClass.text}`, ceiling: null, reference: null, planetClass };
   const required = requiredSingleScatteringAlbedo(posterior.geometricAlbedo, matched);
   const offset = s.measurements.phaseOffsetDeg ? readPhaseOffset(s.measurements.phaseOffsetDeg, s.band, posterior.thermalFraction.median) : undefined;
   const warnings = [...posterior.warnings];

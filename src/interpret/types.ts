@@ -13,7 +13,8 @@ export interface CatalogData {
   condensates?: readonly CondensateCurve[];
 }
 
-export type CandidateStatus = 'consistent' | 'marginal' | 'excluded';
+/** untested: the albedo is not excluded but the entry has no temperature limits, so it cannot be called consistent. */
+export type CandidateStatus = 'consistent' | 'marginal' | 'untested' | 'excluded';
 
 /** How an entry's band relates to the measured band. */
 export interface BandOverlap {
@@ -29,10 +30,11 @@ export interface TemperatureCheck {
   kind: 'window' | 'condensation' | 'none';
   /** Feasible range [K]; null where open. For condensation: T_cond at 1e-3 and at 1 bar. */
   rangeK: [number | null, number | null];
-  /** P(T_day in range), P(T_eq in range) under the posterior (1 when kind is none); for condensation P(T <= T_cond at 1 bar). */
-  probabilityDayside: number;
-  probabilityEquilibrium: number;
-  grade: 'ok' | 'marginal' | 'excluded';
+  /** P(T_day in range), P(T_eq in range) under the posterior (null when kind is none); for condensation P(T <= T_cond at 1 bar). */
+  probabilityDayside: number | null;
+  probabilityEquilibrium: number | null;
+  /** untested: no window and no curve (kind none). */
+  grade: 'ok' | 'marginal' | 'excluded' | 'untested';
   /** Readable sentence when grade is not ok, or the feasibility note when it is. */
   text: string;
 }
@@ -74,7 +76,7 @@ export interface CloudFreeCeiling {
   categories: string[];
   /** Number of feasible cloud-free entries the maximum was taken over. */
   entriesConsidered: number;
-  /** False when no reference with a temperature range was feasible and untested ones were used. */
+  /** Always true: references without a temperature range are never used. */
   temperatureTested: boolean;
 }
 
@@ -86,12 +88,22 @@ export interface PlanetClassReading {
   text: string;
 }
 
+/** The cloud-free reference the verdict used, with its regime (class, temperature window, band). */
+export interface VerdictReference {
+  id: string;
+  name: string;
+  regime: string;
+  geometricAlbedoCeiling: number;
+  sources: string[];
+}
+
 export interface Verdict {
   cloudsOrIceRequired: 'yes' | 'no' | 'inconclusive';
   /** P(A_g > ceiling) under the posterior (null when no ceiling exists). */
   probability: number | null;
   reason: string;
   ceiling: CloudFreeCeiling | null;
+  reference: VerdictReference | null;
   planetClass: PlanetClassReading;
 }
 

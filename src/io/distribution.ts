@@ -19,6 +19,13 @@ export type Dist =
 export interface FieldSpec {
   unit: string;
   range: RangeBounds;
+  /**
+   * The units this field accepts, for messages (examples for fields read through
+   * mathjs; the complete list when `factors` is given).
+   */
+  accepts: readonly string[];
+  /** When given, the only units accepted, each with its factor to the canonical unit (e.g. "%" = 1e4 ppm). */
+  factors?: Readonly<Record<string, number>>;
 }
 
 /** Reads a samples file for a {samplesFile, column} quantity (CLI only). */
@@ -59,12 +66,22 @@ export function centralValue(d: Dist): number {
 export function toDist(path: string, q: QuantityInput, spec: FieldSpec, issues: Issue[], readSamples?: SamplesReader): Dist | undefined {
   const unit = typeof q === 'object' && q.unit !== undefined ? q.unit : spec.unit;
   const before = issues.length;
+  const accepted = spec.accepts.length > 0 ? spec.accepts.map((u) => (u === '' ? 'no unit (a pure number)' : `"${u}"`)).join(', ') : 'no unit';
   const conv = (x: number): number => {
+    if (spec.factors) {
+      const factor = spec.factors[unit];
+      if (factor === undefined) {
+        if (issues.length === before) issues.push({ path: `${path}.unit`, message: `unit "${unit}" is not accepted here; ${path} accepts ${accepted}`, value: unit, allowed: accepted });
+        return NaN;
+      }
+      return x * factor;
+    }
     try {
       return convertValue(path, x, unit, spec.unit);
     } catch (e) {
       const hesper = e as { issues?: Issue[] };
-      if (issues.length === before) issues.push(...(hesper.issues ?? [{ path: `${path}.unit`, message: String(e) }]));
+      const found = hesper.issues ?? [{ path: `${path}.unit`, message: String(e) }];
+      if (issues.length === before) issues.push(...found.map((i) => ({ ...i, message: `${i.message}; ${path} accepts ${accepted}`, allowed: accepted })));
       return NaN;
     }
   };

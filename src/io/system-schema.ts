@@ -4,6 +4,7 @@
  */
 import { z } from 'zod';
 import { measurementQuantity, parameterQuantity } from './quantity-schema.ts';
+import { DEFAULT_PHASE_INTEGRAL } from './system-fields.ts';
 
 const opt = <T extends z.ZodType>(s: T, d: string) => s.optional().describe(d);
 
@@ -74,13 +75,17 @@ export const measurementsSchema = z
 
 export const assumptionsSchema = z
   .object({
-    thermal: z.enum(['self-consistent', 'none']).default('self-consistent').describe('Model the thermal emission (default) or assume pure reflection.'),
+    thermal: z.enum(['self-consistent', 'local-equilibrium', 'none']).default('self-consistent')
+      .describe('Thermal emission: self-consistent (default; uniform dayside at the Cowan & Agol 2011 temperature), local-equilibrium (dayside T proportional to cos^(1/4) of the angle from the substellar point at eps = 0, blending to uniform as eps rises), or none (pure reflection).'),
     weighting: z.enum(['photon', 'energy']).default('photon').describe('Band integrals per photon (default) or per energy.'),
     redistribution: parameterQuantity.default({ min: 0, max: 1 }).describe('Heat-redistribution efficiency eps in [0, 1].'),
-    phaseIntegral: parameterQuantity.default({ min: 1, max: 1.5 }).describe('Phase integral q; A_B = q A_g.'),
-    limbDarkening: parameterQuantity.default({ min: 0.45, max: 0.75 }).describe('Linear limb-darkening coefficient u of the star (typical values).'),
-    gravityDarkening: parameterQuantity.default({ min: 0.3, max: 0.4 }).describe('Gravity-darkening coefficient g of the star (typical values).'),
+    phaseIntegral: parameterQuantity.default({ ...DEFAULT_PHASE_INTEGRAL })
+      .describe(`Phase integral q; A_B = q A_g. Default uniform on [${DEFAULT_PHASE_INTEGRAL.min}, ${DEFAULT_PHASE_INTEGRAL.max}]: from below conservative Rayleigh scattering (1.25) past the Lambert sphere (1.5) to semi-infinite isotropic scatterers with single-scattering albedo 0.5 (1.61).`),
+    limbDarkening: parameterQuantity.optional().describe("Linear limb-darkening coefficient u of the star in the band; default: from the stellar Teff in the band (gray Eddington atmosphere), with the ellipsoidal prediction's model uncertainty."),
+    gravityDarkening: parameterQuantity.optional().describe("Gravity-darkening coefficient g of the star in the band; default: from the stellar Teff in the band (von Zeipel 1924 for radiative, Lucy 1967 for convective envelopes)."),
     planetClass: z.enum(['auto', 'giant', 'rocky']).default('auto').describe('Planet class for the cloud-free ceiling; auto decides from the radius.'),
+    userEntryTemperature: z.enum(['window', 'condensation']).default('window')
+      .describe("For your own catalog entries that give both a temperature window and a condensing species: test the planet's temperature against the entry's window (default) or against the species' condensation curve."),
     samples: z.number().int().min(100).max(100_000).default(4000).describe('Number of nuisance draws.'),
     gridNodes: z.number().int().min(16).max(4096).default(256).describe('Geometric-albedo grid nodes per draw.'),
     seed: z.number().int().min(0).max(2 ** 31 - 1).default(1).describe('Seed of the random generator.'),

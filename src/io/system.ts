@@ -27,7 +27,9 @@ export interface SystemInput {
     depthAmplitudeCorrelation?: number;
   };
   assumptions: Omit<SystemFile['assumptions'], keyof typeof ASSUMPTION_FIELDS> & {
-    redistribution: Dist; phaseIntegral: Dist; limbDarkening: Dist; gravityDarkening: Dist;
+    redistribution: Dist; phaseIntegral: Dist;
+    /** Given by the user, or undefined: then derived from the stellar Teff in the band (physics/darkening.ts). */
+    limbDarkening?: Dist; gravityDarkening?: Dist;
   };
   /** What the reader did that the user should know (e.g. a semi-amplitude doubled). */
   notes: string[];
@@ -143,7 +145,8 @@ export function parseSystem(json: unknown, opts: ParseOptions = {}): SystemInput
     }
   }
   const spectrum = f.star.spectrum && band ? readStarSpectrum(f.star.spectrum, band, issues, opts.readText) : undefined;
-  if (issues.length === 0 && band && star.teffK && a.redistribution && a.phaseIntegral && a.limbDarkening && a.gravityDarkening) {
+  if (issues.length === 0 && band && star.teffK && a.redistribution && a.phaseIntegral) {
+    const { limbDarkening: _u, gravityDarkening: _g, ...rest } = f.assumptions;
     const system: SystemInput = {
       name: f.name,
       band,
@@ -151,9 +154,10 @@ export function parseSystem(json: unknown, opts: ParseOptions = {}): SystemInput
       planet: f.planet.transitEpochBjd !== undefined ? { ...planet, transitEpochBjd: f.planet.transitEpochBjd } : planet,
       measurements,
       assumptions: {
-        ...f.assumptions,
+        ...rest,
         redistribution: a.redistribution, phaseIntegral: a.phaseIntegral,
-        limbDarkening: a.limbDarkening, gravityDarkening: a.gravityDarkening,
+        ...(a.limbDarkening ? { limbDarkening: a.limbDarkening } : {}),
+        ...(a.gravityDarkening ? { gravityDarkening: a.gravityDarkening } : {}),
       },
       notes,
     };

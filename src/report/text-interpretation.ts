@@ -8,7 +8,7 @@ import { fmtAlbedo, fmtRange } from '../interpret/match.ts';
 import { renderTable } from './table.ts';
 
 /** Rows of the candidates table per status (our choice: one screen). */
-export const TABLE_ROWS = { consistent: 10, marginal: 5, excluded: 5 } as const;
+export const TABLE_ROWS = { consistent: 10, marginal: 5, untested: 5, excluded: 5 } as const;
 
 /** The conversion to A_g in a few words. */
 const CONVERSION: Record<string, string> = {
@@ -22,6 +22,7 @@ const CONVERSION: Record<string, string> = {
 /** The reason that decided an entry's status (the first one that is not a plain pass). */
 function mainReason(c: Candidate): string {
   const failing = c.reasons.filter((r) => !/^(albedo:|converted:|temperature:)/.test(r));
+  if (c.status === 'untested') return c.reasons.find((r) => r.startsWith('temperature untested')) ?? failing[0] ?? '';
   return failing[0] ?? c.reasons[0] ?? '';
 }
 
@@ -31,7 +32,7 @@ function clip(text: string, n: number): string {
 
 export function candidatesTable(i: Interpretation): string {
   const rows: string[][] = [];
-  for (const status of ['consistent', 'marginal', 'excluded'] as const) {
+  for (const status of ['consistent', 'marginal', 'untested', 'excluded'] as const) {
     const list = i.candidates.filter((c) => c.status === status);
     for (const c of list.slice(0, TABLE_ROWS[status])) {
       rows.push([status, fmtRange(c.geometricAlbedoRange[0], c.geometricAlbedoRange[1]), c.probability.toFixed(3), clip(c.name, 52), clip(status === 'consistent' ? CONVERSION[c.quantity] ?? c.conversion : mainReason(c), 100)]);
@@ -44,7 +45,10 @@ export function candidatesTable(i: Interpretation): string {
 export function verdictLines(i: Interpretation): string[] {
   const v = i.verdict;
   const p = v.probability === null ? 'n/a' : v.probability.toFixed(3);
-  return [`clouds or ice required: ${v.cloudsOrIceRequired.toUpperCase()} (P(A_g > ceiling) = ${p})`, `  ${v.reason}`];
+  const ref = v.reference
+    ? `  reference: ${v.reference.name} [${v.reference.regime}], A_g up to ${fmtAlbedo(v.reference.geometricAlbedoCeiling)}${v.reference.sources.length > 0 ? ` (${v.reference.sources.join(', ')})` : ''}`
+    : '  reference: none for this planet\'s regime';
+  return [`clouds or ice required: ${v.cloudsOrIceRequired.toUpperCase()} (P(A_g > ceiling) = ${p})`, ref, `  ${v.reason}`];
 }
 
 export function particleLines(i: Interpretation): string[] {

@@ -31,7 +31,7 @@ function firstPerMaterial(list: readonly Candidate[], n: number): Candidate[] {
   const out: Candidate[] = [];
   const seen = new Set<string>();
   for (const c of list) {
-    const k = c.name.replace(/,?\s*r_eff.*$/, '').replace(/\s*\(.*\)$/, '').toLowerCase();
+    const k = c.name.replace(/,?\s*r_eff.*$/, '').replace(/\s*\([^()]*\)$/, '').toLowerCase();
     if (seen.has(k)) continue;
     seen.add(k);
     out.push(c);
@@ -75,6 +75,12 @@ export function candidateSentences(w: Writer): string[] {
   if (hot.length > 0) {
     const t = w.eq('T_\\mathrm{day}', w.i.daysideTemperatureK, 'K');
     out.push(`${list(hot.map((c) => item(w, c, temperatureWhy(c, w))))} would match the albedo but ${hot.length === 1 ? 'is' : 'are'} excluded by the temperature (${t}).`);
+  }
+
+  const untested = firstPerMaterial(materials.filter((c) => c.status === 'untested'), EXCLUDED_COUNT);
+  if (untested.length > 0) {
+    const more = materials.filter((c) => c.status === 'untested').length - untested.length;
+    out.push(`${list(untested.map((c) => item(w, c)))}${more > 0 ? ` and ${more} more` : ''} would match the albedo but ${untested.length + more === 1 ? 'has' : 'have'} no temperature window or condensation curve in the catalog, so ${untested.length + more === 1 ? 'it was' : 'they were'} not tested against this planet's temperature.`);
   }
 
   const no = i.verdict.cloudsOrIceRequired === 'no';

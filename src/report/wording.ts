@@ -41,33 +41,66 @@ function modelSentence(w: Writer): string {
   const a = w.s.assumptions;
   const q = `the phase integral ${w.m.math('q')} (${w.t(describeDist(a.phaseIntegral))}) with ${w.m.math(`${AB} = q\\,${AG}`)}`;
   if (a.thermal === 'none') return `Thermal emission of the planet is neglected (pure reflection), with ${q}.`;
-  return `The planet's thermal emission is modelled as blackbody radiation from a dayside and a nightside hemisphere whose temperatures follow from energy balance${w.cite([w.c.method(METHOD_PAPERS.cowanAgol)])}, marginalising over the heat-redistribution efficiency ${w.m.math('\\varepsilon')} (${w.t(describeDist(a.redistribution))}) and ${q}.`;
+  const map = a.thermal === 'local-equilibrium' ? ' (the dayside in local equilibrium, its temperature falling as the fourth root of the cosine of the angle from the substellar point and blending to uniform as the redistribution rises)' : '';
+  return `The planet's thermal emission is modelled as blackbody radiation from a dayside${map} and a nightside hemisphere whose temperatures follow from energy balance${w.cite([w.c.method(METHOD_PAPERS.cowanAgol)])}, marginalising over the heat-redistribution efficiency ${w.m.math('\\varepsilon')} (${w.t(describeDist(a.redistribution))}) and ${q}.`;
+}
+
+/** The corner sentence: where the median A_g runs at the corners of the (eps, q) priors, and what drives it. */
+function cornerSentence(w: Writer): string | undefined {
+  const { i, m } = w;
+  const corners = i.sensitivity.filter((r) => Number.isFinite(r.geometricAlbedo.median) && !r.ruledOut);
+  if (corners.length < 2) return undefined;
+  const med = corners.map((r) => r.geometricAlbedo.median);
+  const spread = (key: 'redistribution' | 'phaseIntegral') => {
+    const other = key === 'redistribution' ? 'phaseIntegral' : 'redistribution';
+    const groups = new Map<number, number[]>();
+    for (const r of corners) groups.set(r[other], [...(groups.get(r[other]) ?? []), r.geometricAlbedo.median]);
+    return Math.max(...[...groups.values()].map((g) => Math.max(...g) - Math.min(...g)));
+  };
+  const set = (key: 'redistribution' | 'phaseIntegral') => [...new Set(corners.map((r) => r[key]))].join(', ');
+  const driver = spread('redistribution') >= spread('phaseIntegral') ? `the heat redistribution ${m.math('\\varepsilon')}` : `the phase integral ${m.math('q')}`;
+  const out = i.sensitivity.filter((r) => r.ruledOut).length;
+  const excluded = out > 0 ? ` (${out} corner${out === 1 ? '' : 's'} the data rule out left aside)` : '';
+  return `At the corners ${m.math(`\\varepsilon \\in \\{${set('redistribution')}\\}`)}, ${m.math(`q \\in \\{${set('phaseIntegral')}\\}`)} of the priors${excluded} the median ${m.math(AG)} runs from ${albedoText(Math.min(...med))} to ${albedoText(Math.max(...med))}; ${driver} drives it most.`;
 }
 
 function albedoSentences(w: Writer): string[] {
   const { i, m } = w;
-  const [lo, hi] = interval95(i.geometricAlbedo);
-  const out = [
-    `This gives a geometric albedo ${w.eq(AG, i.geometricAlbedo)} (68 ${m.percent} interval; 95 ${m.percent}: ${w.range(lo, hi)}) and a Bond albedo ${w.eq(AB, i.bondAlbedo)}.`,
-  ];
+  const g = i.geometricAlbedo;
+  const out: string[] = [];
+  if (g.constraint === 'measured') {
+    const [lo, hi] = interval95(g);
+    out.push(`This gives a geometric albedo ${w.eq(AG, g)} (68 ${m.percent} interval; 95 ${m.percent}: ${w.range(lo, hi)}) and a Bond albedo ${w.eq(AB, i.bondAlbedo)}; the albedo is bounded away from zero and agrees between the assumed heat redistributions and phase integrals the data allow.`);
+  } else if (g.constraint === 'upper-limit') {
+    out.push(`The geometric albedo is consistent with zero: we obtain an upper limit ${m.math(`${AG} < ${albedoText(g.upperLimit95)}`)} (95 ${m.percent}), and ${m.math(`${AB} < ${albedoText(i.bondAlbedo.upperLimit95)}`)}.`);
+  } else {
+    const allowed = i.sensitivity.filter((r) => !r.ruledOut && Number.isFinite(r.geometricAlbedo.median));
+    const lo = allowed.reduce((a, b) => (b.geometricAlbedo.median < a.geometricAlbedo.median ? b : a));
+    const hi = allowed.reduce((a, b) => (b.geometricAlbedo.median > a.geometricAlbedo.median ? b : a));
+    const at = (r: typeof lo) => m.math(`\\varepsilon = ${r.redistribution},\\ q = ${r.phaseIntegral}`);
+    out.push(`The measurement does not constrain the geometric albedo beyond the assumptions: depending on the assumed heat redistribution and phase integral, ${m.math(AG)} lies between ${albedoText(lo.geometricAlbedo.median)} (${at(lo)}) and ${albedoText(hi.geometricAlbedo.median)} (${at(hi)}), below ${albedoText(g.upperLimit95)} (95 ${m.percent}) over the priors. A measurement of the planet's thermal emission (an infrared eclipse) or of its dayside temperature would break this degeneracy.`);
+  }
   if (w.s.assumptions.thermal !== 'none') {
-    out.push(`Thermal emission makes up ${pct(i.thermalFraction.median)} ${m.percent} of the signal (95 ${m.percent} upper limit ${pct(i.thermalFraction.upperLimit95)} ${m.percent}); attributing all of it to reflected light would give ${w.eq(AG, i.allReflectedGeometricAlbedo)}.`);
-    out.push(`The dayside temperature is ${w.eq('T_\\mathrm{day}', i.daysideTemperatureK, 'K')} and the equilibrium temperature ${w.eq('T_\\mathrm{eq}', i.equilibriumTemperatureK, 'K')}.`);
+    const all = g.constraint === 'measured'
+      ? w.eq(AG, i.allReflectedGeometricAlbedo)
+      : `at most ${m.math(`${AG} < ${albedoText(i.allReflectedGeometricAlbedo.upperLimit95)}`)} (95 ${m.percent})`;
+    out.push(`Thermal emission makes up ${pct(i.thermalFraction.median)} ${m.percent} of the signal (95 ${m.percent} upper limit ${pct(i.thermalFraction.upperLimit95)} ${m.percent}); attributing all of it to reflected light would give ${all}.`);
+    out.push(`Under these assumptions the model gives a dayside temperature ${w.eq('T_\\mathrm{day}', i.daysideTemperatureK, 'K')}${w.s.measurements.daysideTemperatureK ? ' (fitted to the measured one)' : ''} and an equilibrium temperature ${w.eq('T_\\mathrm{eq}', i.equilibriumTemperatureK, 'K')}.`);
   }
-  const corners = i.sensitivity.filter((r) => Number.isFinite(r.geometricAlbedo.median));
-  if (corners.length >= 2) {
-    const med = corners.map((r) => r.geometricAlbedo.median);
-    const spread = (key: 'redistribution' | 'phaseIntegral') => {
-      const other = key === 'redistribution' ? 'phaseIntegral' : 'redistribution';
-      const groups = new Map<number, number[]>();
-      for (const r of corners) groups.set(r[other], [...(groups.get(r[other]) ?? []), r.geometricAlbedo.median]);
-      return Math.max(...[...groups.values()].map((g) => Math.max(...g) - Math.min(...g)));
-    };
-    const driver = spread('redistribution') >= spread('phaseIntegral') ? `the heat redistribution ${m.math('\\varepsilon')}` : `the phase integral ${m.math('q')}`;
-    out.push(`At the corners ${m.math('\\varepsilon \\in \\{0, 1\\}')}, ${m.math('q \\in \\{1, 1.5\\}')} the median ${m.math(AG)} runs from ${albedoText(Math.min(...med))} to ${albedoText(Math.max(...med))}; ${driver} drives it most.`);
+  const corners = cornerSentence(w);
+  if (corners) out.push(corners);
+  const map = i.thermalMapSensitivity;
+  if (map && Number.isFinite(map.medianShift)) {
+    const other = map.alternative === 'local-equilibrium' ? 'a dayside in local equilibrium (hotter at the substellar point, brighter in the Wien tail)' : 'a uniform dayside';
+    out.push(`Assuming ${other} instead would move the median ${m.math(AG)} by ${map.medianShift >= 0 ? '+' : ''}${sig2(map.medianShift)}.`);
   }
-  if (!i.detected) out.push(`The signal is below ${m.math('3\\sigma')}, so the albedo is best read as an upper limit, ${m.math(`${AG} < ${albedoText(i.geometricAlbedo.upperLimit95)}`)} (95 ${m.percent}).`);
   return out;
+}
+
+/** When the model cannot reproduce the data: say so, and quote no posterior. */
+function cannotReproduceSentence(w: Writer): string {
+  const problems = w.i.modelFit.problems.map((p) => w.t(p.replace(/\.$/, ''))).join('; ');
+  return `The model cannot reproduce these measurements: ${problems}. We therefore quote no albedo or temperature from them.`;
 }
 
 function verdictSentence(w: Writer): string {
@@ -81,17 +114,22 @@ function verdictSentence(w: Writer): string {
     : pc.planetClass === 'either'
       ? `The planet's radius of ${m.math(r)} lies in the radius valley${fulton}, so both clear atmospheres and bare rock count as cloud-free.`
       : `The planet's radius of ${m.math(r)}${w.s.star.radiusRsun ? '' : ` (for ${m.math('R_\\star = 1\\,R_\\odot')}; the stellar radius is not given)`} places it ${pc.planetClass === 'rocky' ? 'below' : 'above'} the radius valley${fulton}, so the cloud-free reference is ${pc.planetClass === 'rocky' ? 'bare rock or lava' : 'a clear atmosphere'}.`;
-  if (!v.ceiling || v.probability === null) {
-    return `No cloud-free reference in the catalog is feasible at this planet's temperature, so whether clouds or ice are required cannot be decided. ${classText}`;
+  if (!w.i.modelFit.reproducesData) {
+    return 'Whether clouds or ice are required cannot be decided until the model reproduces the measurements.';
+  }
+  if (!v.ceiling || !v.reference || v.probability === null) {
+    return `No cloud-free reference in the catalog covers this planet's temperature regime, so whether clouds or ice are required cannot be decided. ${classText}`;
   }
   const ceil = albedoText(v.ceiling.geometricAlbedo);
-  const entry = w.i.candidates.find((c) => c.id === v.ceiling!.entryId);
-  const ref = entry ? `${w.t(proseName(entry))}${w.cite(w.c.keys(entry.sources))}` : w.t(v.ceiling.entryName);
+  const entry = w.i.candidates.find((c) => c.id === v.reference!.id);
+  const ref = entry ? `${w.t(proseName(entry))}${w.cite(w.c.keys(entry.sources))}` : w.t(v.reference.name);
   const p = v.probability;
   const prob = (x: number) => (x > 0.999 ? '> 0.999' : x < 0.001 ? '< 0.001' : `= ${x.toFixed(3)}`);
-  const what = `the brightest cloud-free reference feasible at this temperature (${ref})`;
+  const what = `the cloud-free reference for this planet's regime (${ref}; ${w.t(v.reference.regime)})`;
   let sentence: string;
-  if (v.cloudsOrIceRequired === 'yes') {
+  if (v.cloudsOrIceRequired === 'inconclusive' && w.i.geometricAlbedo.constraint === 'prior-dominated' && p >= 0.95) {
+    sentence = `Whether clouds or ice are required cannot be decided: ${m.math(AG)} would exceed ${ceil}, ${what}, with probability ${m.math(`P ${prob(p)}`)}, but only under the assumed heat redistribution, not because the data require it.`;
+  } else if (v.cloudsOrIceRequired === 'yes') {
     sentence = `Reflective clouds or ice are required: the probability that ${m.math(AG)} exceeds ${ceil}, ${what}, is ${m.math(`P ${prob(p)}`)}.`;
   } else if (v.cloudsOrIceRequired === 'no') {
     sentence = `Clouds or ice are not required: ${m.math(AG)} stays below ${ceil}, ${what}, with probability ${m.math(`P ${prob(1 - p)}`)}, so a cloud-free planet explains the measurement (clouds are not ruled out).`;
@@ -169,6 +207,10 @@ function cautionSentences(w: Writer): string {
 export function composeWriteUp(i: Interpretation, s: SystemInput, sources: readonly SourceRecord[], m: Markup): WriteUp {
   const c = new Citations(sources);
   const w = new Writer(i, s, c, m);
+  if (!i.modelFit.reproducesData) {
+    const p1 = [measurementSentence(w), cannotReproduceSentence(w), modelSentence(w)].join(' ');
+    return { paragraphs: [p1, verdictSentence(w), cautionSentences(w)], citations: c };
+  }
   const p1 = [measurementSentence(w), modelSentence(w), ...albedoSentences(w)].join(' ');
   const phase = phaseSentence(w);
   const p2 = [verdictSentence(w), particleSentence(w), ...candidateSentences(w), ...(phase ? [phase] : [])].join(' ');

@@ -18,7 +18,7 @@ const VERDICT_WORDS = {
   inconclusive: ['Undecided', 'The albedo does not separate cloudy from cloud-free.'],
 };
 
-const STATUS_MARK = { consistent: '●', marginal: '◐', excluded: '○' };
+const STATUS_MARK = { consistent: '●', marginal: '◐', untested: '◌', excluded: '○' };
 
 function subscripted(text) {
   return text.split(/(_[A-Za-z])/).map((p) => (p.startsWith('_') ? el('sub', {}, p.slice(1)) : p));
@@ -43,6 +43,9 @@ export function renderVerdict(node, r) {
     el('p', { class: 'verdict-title', id: 'verdict-title', 'data-verdict': v.cloudsOrIceRequired }, title),
     v.probability === null ? null : el('p', { class: 'verdict-p' }, 'P(A', el('sub', {}, 'g'), ` above the cloud-free ceiling): ${fmtProbability(v.probability)}`),
     el('p', { class: 'verdict-gloss' }, gloss),
+    v.reference
+      ? el('p', { class: 'verdict-reference', 'data-reference': v.reference.id }, `Cloud-free reference: ${v.reference.name} (${v.reference.regime}), A`, el('sub', {}, 'g'), ` up to ${fmt(v.reference.geometricAlbedoCeiling)}.`)
+      : el('p', { class: 'verdict-reference' }, 'No cloud-free reference covers this planet\u2019s regime.'),
     el('p', { class: 'verdict-reason' }, v.reason));
 }
 
@@ -55,9 +58,19 @@ export function renderSummary(tbody, note, r) {
       intervalCell(field, s, 'lower68', 'upper68', unit),
       intervalCell(field, s, 'lower95', 'upper95', unit));
   }));
-  note.textContent = r.detected
-    ? 'The signal is detected at 3 σ or more.'
-    : `The signal is below 3 σ: read the A_g upper limit (95 %: ${fmt(r.geometricAlbedo.upperLimit95)}) rather than the median.`;
+  note.dataset.constraint = r.geometricAlbedo.constraint;
+  note.textContent = `${r.detected ? 'The eclipse signal is detected at 3 σ or more.' : 'The eclipse signal is below 3 σ.'} ${constraintText(r)}`;
+}
+
+/** How the data constrain the albedo, as the page states it. */
+export function constraintText(r) {
+  const g = r.geometricAlbedo;
+  if (r.modelFit && !r.modelFit.reproducesData) return `The model cannot reproduce the data, so these numbers are not meaningful: ${r.modelFit.problems.join(' ')}`;
+  if (g.constraint === 'measured') return 'Reflected light is detected: the albedo is bounded away from zero and the same for every allowed heat redistribution and phase integral.';
+  if (g.constraint === 'upper-limit') return `The albedo is an upper limit: A_g < ${fmt(g.upperLimit95)} (95 %); no reflected light is detected.`;
+  const allowed = r.sensitivity.filter((c) => !c.ruledOut && Number.isFinite(c.geometricAlbedo.median)).map((c) => c.geometricAlbedo.median);
+  const range = allowed.length > 0 ? `between ${fmt(Math.min(...allowed))} and ${fmt(Math.max(...allowed))}` : 'anywhere in its prior';
+  return `The albedo is prior-dominated: it lies ${range} depending on the assumed heat redistribution and phase integral, not on the data. An infrared eclipse or a measured dayside temperature would break the degeneracy.`;
 }
 
 /** How many candidates the table shows before "show all". */
@@ -82,14 +95,16 @@ export function renderCandidates(tbody, countNode, r, view) {
       el('td', { class: 'nowrap' }, fmtProbability(c.probability)),
       reasonsCell(c.reasons))));
   const excluded = r.candidates.length - fitting.length;
-  countNode.textContent = `${list.length} of ${r.candidates.length} catalog entries shown (${fitting.length} consistent or marginal, ${excluded} excluded), ranked by the posterior probability inside each interval.`;
+  const untested = fitting.filter((c) => c.status === 'untested').length;
+  countNode.textContent = `${list.length} of ${r.candidates.length} catalog entries shown (${fitting.length - untested} consistent or marginal, ${untested} untested for temperature, ${excluded} excluded), ranked by the posterior probability inside each interval.`;
 }
 
 export function renderDetails(r) {
   fill(document.querySelector('#sensitivity-table tbody'), ...r.sensitivity.map((row) =>
     el('tr', {},
       el('td', {}, fmt(row.redistribution)), el('td', {}, fmt(row.phaseIntegral)),
-      el('td', {}, fmt(row.geometricAlbedo.median)), el('td', {}, fmtRange(row.geometricAlbedo.lower68, row.geometricAlbedo.upper68)))));
+      el('td', {}, fmt(row.geometricAlbedo.median)), el('td', {}, fmtRange(row.geometricAlbedo.lower68, row.geometricAlbedo.upper68)),
+      el('td', {}, row.deltaChiSquare === null ? 'no draw fits' : `${row.ruledOut ? 'ruled out' : 'allowed'} (Δχ² = ${fmt(row.deltaChiSquare)})`))));
   const m = r.massEffects;
   fill(document.getElementById('mass-effects'), m
     ? el('p', {}, `From the masses: ellipsoidal semi-amplitude ${fmt(m.ellipsoidalPpm.median)} ppm, Doppler beaming ${fmt(m.beamingPpm.median)} ppm, RV semi-amplitude ${fmt(m.rvSemiAmplitudeMs.median)} m/s.`)

@@ -29,7 +29,10 @@ describe('hesper interpret', () => {
     const run = await runCli(['interpret', 'systems/corvina-b.json', '--json', '--samples', '1000', '--seed', '3'], { cwd: demoDir });
     expect(run.code).toBe(0);
     const j = JSON.parse(run.stdout);
-    for (const key of ['geometricAlbedo', 'bondAlbedo', 'daysideTemperatureK', 'equilibriumTemperatureK', 'thermalDepthPpm', 'reflectedDepthPpm', 'thermalFraction', 'allReflectedGeometricAlbedo']) {
+    expect(Object.keys(j.geometricAlbedo)).toEqual(['median', 'lower68', 'upper68', 'lower95', 'upper95', 'upperLimit95', 'constraint']);
+    expect(['measured', 'upper-limit', 'prior-dominated']).toContain(j.geometricAlbedo.constraint);
+    expect(typeof j.reflectedLightDetected).toBe('boolean');
+    for (const key of ['bondAlbedo', 'daysideTemperatureK', 'equilibriumTemperatureK', 'thermalDepthPpm', 'reflectedDepthPpm', 'thermalFraction', 'allReflectedGeometricAlbedo']) {
       expect(Object.keys(j[key])).toEqual(['median', 'lower68', 'upper68', 'lower95', 'upper95', 'upperLimit95']);
     }
     expect(typeof j.detected).toBe('boolean');

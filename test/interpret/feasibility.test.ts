@@ -6,7 +6,7 @@ import { entry, temperatures } from './helpers.ts';
 
 const mgsio3Cloud = entry({ id: 'mgsio3-cloud', category: 'cloud', quantity: 'single-scattering', condensate: 'MgSiO3', valueMin: 0.99, valueNominal: 0.995, valueMax: 1 });
 const waterIceCloud = entry({ id: 'water-ice-cloud', category: 'cloud', quantity: 'single-scattering', condensate: 'H2O', valueMin: 1, valueNominal: 1, valueMax: 1 });
-const iceSurface = entry({ id: 'ice-surface', category: 'ice', quantity: 'surface', temperatureMaxK: 273, valueMin: 0.7, valueNominal: 0.8, valueMax: 0.9 });
+const iceSurface = entry({ id: 'ice-surface', category: 'ice', quantity: 'surface', temperatureMinK: null, temperatureMaxK: 273, valueMin: 0.7, valueNominal: 0.8, valueMax: 0.9 });
 
 describe('temperature feasibility from condensation curves', () => {
   it('takes the window of a cloud from its curve between 1e-3 and 1 bar', () => {
@@ -76,10 +76,28 @@ describe('temperature feasibility from windows', () => {
     expect(checkTemperature(planet, temperatures([2550, 2650])).grade).toBe('excluded');
   });
 
-  it('entries without limits pass with a note', () => {
-    const r = checkTemperature(entry({ id: 'no-limits' }), temperatures([2000, 2100]));
-    expect(r).toMatchObject({ kind: 'none', grade: 'ok' });
-    expect(r.text).toMatch(/no limits/);
+  it('an entry with neither a window nor a curve is untested, never feasible', () => {
+    const r = checkTemperature(entry({ id: 'no-limits', temperatureMinK: null, temperatureMaxK: null }), temperatures([2000, 2100]));
+    expect(r).toMatchObject({ kind: 'none', grade: 'untested', probabilityDayside: null });
+    expect(r.text).toMatch(/^temperature untested: .* cannot be shown to exist at this planet's temperature/);
+    // A species without a curve and no window (soot, carbon) is untested too, even at 3300 K.
+    const soot = entry({ id: 'soot', category: 'haze', condensate: 'carbon', quantity: 'single-scattering', temperatureMinK: null, temperatureMaxK: null });
+    expect(checkTemperature(soot, temperatures([3200, 3400])).grade).toBe('untested');
+  });
+
+  it("keeps a user entry's own window over the condensation curve unless asked, and says which applied", () => {
+    // An invented user entry: MgSiO3 grains said to hold at 1800-2400 K (a window the curve would not give:
+    // T_cond(MgSiO3, 1 bar) = 1597 K, Visscher et al. 2010 form, from memory).
+    const user = entry({ id: 'user-mgsio3', condensate: 'MgSiO3', quantity: 'single-scattering', temperatureMinK: 1800, temperatureMaxK: 2400, origin: 'user' });
+    const ctx = temperatures([2000, 2100]);
+    const own = checkTemperature(user, ctx);
+    expect(own).toMatchObject({ kind: 'window', grade: 'ok' });
+    expect(own.text).toMatch(/the entry's own temperature window applied, not the MgSiO3 condensation curve/);
+    const curve = checkTemperature(user, { ...ctx, userEntryTemperature: 'condensation' });
+    expect(curve).toMatchObject({ kind: 'condensation', grade: 'excluded' });
+    expect(curve.text).toMatch(/the MgSiO3 condensation curve applied, as assumptions\.userEntryTemperature asks/);
+    // A curated entry with a curve follows the curve.
+    expect(checkTemperature({ ...user, origin: 'curated' }, ctx).kind).toBe('condensation');
   });
 
   it('a cloud with a species but no curve falls back to its window', () => {

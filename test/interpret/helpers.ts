@@ -9,7 +9,11 @@ import type { CatalogData } from '../../src/interpret/types.ts';
 import type { Summary } from '../../src/inference/summary.ts';
 import { cleanupTemp, tempDbPath } from '../catalog/helpers.ts';
 
-/** An invented catalog entry (test data only); fields as the catalog-entry JSON. */
+/**
+ * An invented catalog entry (test data only); fields as the catalog-entry JSON. The
+ * default temperature window 300-3000 K lets the temperature test pass for the
+ * invented planets here; give null limits for an entry that is untested.
+ */
 export function entry(over: Partial<CatalogEntry> & { id: string }): CatalogEntry {
   return {
     name: `Invented entry ${over.id}`,
@@ -20,14 +24,14 @@ export function entry(over: Partial<CatalogEntry> & { id: string }): CatalogEntr
     valueMin: 0.1,
     valueNominal: 0.15,
     valueMax: 0.2,
-    temperatureMinK: null,
-    temperatureMaxK: null,
+    temperatureMinK: 300,
+    temperatureMaxK: 3000,
     condensate: null,
     description: 'invented for a test',
     provenance: 'memory',
     appliesTo: ['any'],
     sources: [],
-    origin: 'user',
+    origin: 'curated',
     ...over,
   };
 }

@@ -12,23 +12,30 @@ function ctx(ag: [number, number]): MatchContext {
   return matchContext(ag);
 }
 
-/** Invented cloud-free references: a tested one (window) with A_g up to 0.2, an untested idealised one at 0.8. */
+/**
+ * Invented cloud-free references by regime (test data only): a giant at 900-2000 K with
+ * A_g up to 0.2 in a broad band, a cold one (below 300 K) at 0.6, an idealised law with
+ * no temperature range at 0.8, and a 1400-1600 K TESS-band one at 0.12.
+ */
 const references = [
   entry({ id: 'clear-tested', category: 'clear-atmosphere', valueMin: 0.05, valueNominal: 0.1, valueMax: 0.2, temperatureMinK: 900, temperatureMaxK: 2000, bandMinNm: 200, bandMaxNm: 5000 }),
-  entry({ id: 'clear-cold', category: 'clear-atmosphere', valueMin: 0.5, valueNominal: 0.55, valueMax: 0.6, temperatureMaxK: 300, bandMinNm: 200, bandMaxNm: 5000 }),
-  entry({ id: 'clear-ideal', category: 'clear-atmosphere', valueMin: 0.8, valueNominal: 0.8, valueMax: 0.8, bandMinNm: 200, bandMaxNm: 5000 }),
+  entry({ id: 'clear-cold', category: 'clear-atmosphere', valueMin: 0.5, valueNominal: 0.55, valueMax: 0.6, temperatureMinK: null, temperatureMaxK: 300, bandMinNm: 200, bandMaxNm: 5000 }),
+  entry({ id: 'clear-ideal', category: 'clear-atmosphere', valueMin: 0.8, valueNominal: 0.8, valueMax: 0.8, temperatureMinK: null, temperatureMaxK: null, bandMinNm: 200, bandMaxNm: 5000 }),
 ];
 
-function verdictFor(ag: [number, number], list = references) {
-  const c = ctx(ag);
-  return decideVerdict(matchCatalog(list, c), c.quantiles.geometricAlbedo, giant);
+function verdictFor(ag: [number, number], list = references, over: Partial<MatchContext> = {}, context = {}) {
+  const c = matchContext(ag, over);
+  return decideVerdict(matchCatalog(list, c), c.quantiles.geometricAlbedo, giant, context);
 }
 
 describe('the clouds-or-ice verdict rule', () => {
-  it('uses the highest feasible tested cloud-free reference as the ceiling', () => {
+  it('uses the reference of the planet\'s regime and names it', () => {
     const v = verdictFor([0.3, 0.5]);
     expect(v.ceiling).toMatchObject({ entryId: 'clear-tested', geometricAlbedo: 0.2, temperatureTested: true });
-    expect(v.reason).toMatch(/were not used because they cannot be shown to apply/);
+    expect(v.reference).toEqual({
+      id: 'clear-tested', name: 'Invented entry clear-tested', regime: 'giant, clear atmosphere, 900-2000 K, 200-5000 nm', geometricAlbedoCeiling: 0.2, sources: [],
+    });
+    expect(v.reason).toMatch(/1 cloud-free entry without a temperature range were not used/);
   });
 
   it('says yes when P(A_g > ceiling) >= 0.95, no when <= 0.05, else inconclusive', () => {
@@ -45,16 +52,35 @@ describe('the clouds-or-ice verdict rule', () => {
     expect(verdictFor([0.106, 0.206]).cloudsOrIceRequired).toBe('inconclusive');
   });
 
-  it('falls back to untested references only when no tested one is feasible, and says so', () => {
-    const v = verdictFor([0.3, 0.5], [references[1]!, references[2]!]);
-    expect(v.ceiling).toMatchObject({ entryId: 'clear-ideal', temperatureTested: false });
-    expect(v.cloudsOrIceRequired).toBe('no');
-    expect(v.reason).toMatch(/feasibility cannot be tested/);
+  it('never says yes on a prior-dominated albedo, nor decides when the model cannot reproduce the data', () => {
+    const prior = verdictFor([0.3, 0.5], references, {}, { constraint: 'prior-dominated' });
+    expect(prior.cloudsOrIceRequired).toBe('inconclusive');
+    expect(prior.reason).toMatch(/prior-dominated: it follows the assumed heat redistribution and phase integral/);
+    // A prior-dominated albedo below the ceiling may still say no: every assumption gives a dark planet.
+    expect(verdictFor([0.05, 0.19], references, {}, { constraint: 'prior-dominated' }).cloudsOrIceRequired).toBe('no');
+    const bad = verdictFor([0.3, 0.5], references, {}, { reproducesData: false });
+    expect(bad.cloudsOrIceRequired).toBe('inconclusive');
+    expect(bad.reason).toMatch(/^the model cannot reproduce the measurements/);
   });
 
-  it('is inconclusive without any feasible cloud-free reference', () => {
-    const v = verdictFor([0.3, 0.5], [references[1]!]);
-    expect(v).toMatchObject({ cloudsOrIceRequired: 'inconclusive', probability: null, ceiling: null });
+  it('never uses a reference without a temperature range', () => {
+    const v = verdictFor([0.3, 0.5], [references[1]!, references[2]!]);
+    expect(v).toMatchObject({ cloudsOrIceRequired: 'inconclusive', probability: null, ceiling: null, reference: null });
+    expect(v.reason).toMatch(/covers this planet's temperature regime/);
+  });
+
+  it('prefers a reference in the measured band, and the brightest regime the planet may be in', () => {
+    // The invented planet has T_day 1400-1500 K and T_eq 1200-1300 K (helpers.ts).
+    const tess = entry({ id: 'clear-tess-1400', category: 'clear-atmosphere', valueMin: 0, valueNominal: 0.1, valueMax: 0.12, temperatureMinK: 1400, temperatureMaxK: 1600, bandMinNm: 600, bandMaxNm: 1000 });
+    const blue = entry({ id: 'clear-blue-900', category: 'clear-atmosphere', valueMin: 0, valueNominal: 0.2, valueMax: 0.3, temperatureMinK: 900, temperatureMaxK: 1500, bandMinNm: 290, bandMaxNm: 570 });
+    const hot = entry({ id: 'clear-tess-2500', category: 'clear-atmosphere', valueMin: 0, valueNominal: 0.05, valueMax: 0.4, temperatureMinK: 2500, temperatureMaxK: null, bandMinNm: 600, bandMaxNm: 1000 });
+    // blue has no wavelengths in TESS; hot excludes the planet by temperature: tess is the reference.
+    const v = verdictFor([0.3, 0.5], [tess, blue, hot]);
+    expect(v.reference).toMatchObject({ id: 'clear-tess-1400', geometricAlbedoCeiling: 0.12, regime: 'giant, clear atmosphere, 1400-1600 K, TESS (600-1000 nm)' });
+    // Only a reference of another band: used, and the reason says so.
+    const other = verdictFor([0.3, 0.5], [blue]);
+    expect(other.reference?.id).toBe('clear-blue-900');
+    expect(other.reason).toMatch(/no cloud-free reference of this regime shares wavelengths with the measured band/);
   });
 });
 

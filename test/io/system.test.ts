@@ -52,7 +52,9 @@ describe('system file: quantity forms and units', () => {
   it('applies the documented default assumptions', () => {
     const s = parseSystem(demo('aurelia-b.json'));
     expect(s.assumptions.redistribution).toEqual({ kind: 'uniform', min: 0, max: 1 });
-    expect(s.assumptions.phaseIntegral).toEqual({ kind: 'uniform', min: 1, max: 1.5 });
+    // The default q prior reaches q of semi-infinite isotropic scatterers with w = 0.5
+    // (1.608 from the H-function, rounded up to 1.61; test/inference/phase-integral-prior.test.ts).
+    expect(s.assumptions.phaseIntegral).toEqual({ kind: 'uniform', min: 1, max: 1.61 });
     expect(s.assumptions.samples).toBe(4000);
     expect(s.assumptions.gridNodes).toBe(256);
     expect(s.assumptions.weighting).toBe('photon');
@@ -128,6 +130,22 @@ describe('system file: bad input names the field', () => {
   it('bad units', () => {
     const issues = issuesOf(() => parseSystem(mutate((j) => (j.star.teffK = { value: 5900, sigma: 70, unit: 'Rjup' }))));
     expect(issues[0]!.path).toBe('star.teffK.unit');
+    // Every unit error lists the units the field accepts.
+    expect(issues[0]!.message).toMatch(/star\.teffK accepts "K", "degC"/);
+    const depth = issuesOf(() => parseSystem(mutate((j) => (j.measurements.eclipseDepthPpm = { value: 1.4, sigma: 0.1, unit: 'mmag' }))));
+    expect(depth[0]!.path).toBe('measurements.eclipseDepthPpm.unit');
+    expect(depth[0]!.message).toMatch(/accepts "ppm", "ppt", "%"/);
+  });
+
+  it('reads depths and amplitudes in percent and ppt', () => {
+    // derived: 1 % = 1e4 ppm, 1 ppt = 1e3 ppm.
+    const pct = parseSystem(mutate((j) => (j.measurements.eclipseDepthPpm = { value: 0.0145, sigma: 0.0012, unit: '%' })));
+    expect(pct.measurements.eclipseDepthPpm).toMatchObject({ kind: 'normal' });
+    const d = pct.measurements.eclipseDepthPpm as { mean: number; sigma: number };
+    expect(d.mean).toBeCloseTo(145, 9);
+    expect(d.sigma).toBeCloseTo(12, 9);
+    const ppt = parseSystem(mutate((j) => (j.measurements.eclipseDepthPpm = { value: 0.145, sigma: 0.012, unit: 'ppt' })));
+    expect((ppt.measurements.eclipseDepthPpm as { mean: number }).mean).toBeCloseTo(145, 9);
   });
 
   it('samples files are refused without file access (the API)', () => {

@@ -40,8 +40,8 @@ function hostile(): { i: Interpretation; sources: SourceRecord[] } {
   const i: Interpretation = JSON.parse(JSON.stringify(base));
   i.name = `Planet ${HOSTILE}`;
   i.band.label = `Band ${HOSTILE}`;
-  for (const c of i.candidates) c.name = `${HOSTILE} ${c.id}`;
-  for (const p of [...i.requiredSingleScatteringAlbedo.reachedBy, ...i.requiredSingleScatteringAlbedo.notReached]) p.name = `${HOSTILE} ${p.id}`;
+  for (const c of i.candidates) c.name = `${HOSTILE} ${c.name}`;
+  for (const p of [...i.requiredSingleScatteringAlbedo.reachedBy, ...i.requiredSingleScatteringAlbedo.notReached]) p.name = `${HOSTILE} ${p.name}`;
   const evil = sources.map((s) => ({ ...s, authors: `{${CORPORATE}}` }));
   return { i, sources: evil };
 }

@@ -67,8 +67,10 @@ describe('the composition paragraph (Markdown)', () => {
   it('states the verdict with the probability and ceiling of the JSON', () => {
     const v = aurelia.verdict;
     expect(v.cloudsOrIceRequired).toBe('yes');
-    const m = /exceeds ([\d.]+), the brightest cloud-free reference .*?, is \$P ([>=<]) ([\d.]+)\$/.exec(md)!;
+    const m = /exceeds ([\d.]+), the cloud-free reference for this planet's regime .*?, is \$P ([>=<]) ([\d.]+)\$/.exec(md)!;
     expectPrinted(m[1]!, v.ceiling!.geometricAlbedo);
+    // The reference is named with its regime, as in the JSON.
+    expect(md).toContain(v.reference!.regime);
     if (m[2] === '=') expectPrinted(m[3]!, v.probability!);
     else expect(v.probability!).toBeGreaterThan(Number(m[3]));
   });
@@ -144,5 +146,30 @@ describe('the composition paragraph (LaTeX) and its BibTeX', () => {
     const md = writeUpMarkdown(aurelia, aureliaSystem, sources);
     const num = (s: string) => /A_\\mathrm\{g\} = [\d.]+\^\{\+[\d.]+\}_\{-[\d.]+\}/.exec(s)![0];
     expect(num(w.paragraphs[0]!)).toBe(num(md.paragraphs[0]!));
+  });
+});
+
+describe('the paragraph follows the albedo constraint', () => {
+  const bareClaim = /\$A_\\mathrm\{g\} = [\d.]+(\^\{\+[\d.]+\}_\{-[\d.]+\}| \\pm [\d.]+)\$/;
+
+  it('writes a prior-dominated albedo as the range the assumptions span and names the measurement that would decide', () => {
+    // Corvina b (invented): the corners eps = 0 and eps = 1 disagree by more than the 68 % width.
+    expect(corvina.geometricAlbedo.constraint).toBe('prior-dominated');
+    const md = paragraphMarkdown(corvina, corvinaSystem, sources);
+    expect(md).toMatch(/does not constrain the geometric albedo beyond the assumptions: depending on the assumed heat redistribution and phase integral, \$A_\\mathrm\{g\}\$ lies between [\d.]+ \(\$\\varepsilon = 0/);
+    expect(md).toMatch(/an infrared eclipse\) or of its dayside temperature would break this degeneracy/);
+    expect(md).not.toMatch(bareClaim);
+  });
+
+  it('states first that the model cannot reproduce the data, and quotes no posterior', () => {
+    const s = loadDemo('systems/corvina-b.json');
+    s.measurements = { eclipseDepthPpm: { kind: 'normal', mean: 0.0145, sigma: 0.0012 } }; // a percent value typed as ppm
+    const r = asJson(interpretSystem(s, { catalog: data, samples: 800, seed: 3 }));
+    expect(r.modelFit.reproducesData).toBe(false);
+    expect(r.verdict.cloudsOrIceRequired).toBe('inconclusive');
+    const [p1] = writeUpMarkdown(r, s, sources).paragraphs;
+    expect(p1!).toMatch(/^For Corvina b we use a secondary-eclipse depth of .*?\. The model cannot reproduce these measurements: .*is this in percent\?/);
+    expect(p1!).not.toMatch(/geometric albedo \$A_/);
+    expect(p1!).toMatch(/We therefore quote no albedo or temperature from them/);
   });
 });

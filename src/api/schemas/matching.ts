@@ -6,13 +6,13 @@
 import { z } from 'zod';
 import { apiRegistry } from './common.ts';
 
-const status = z.enum(['consistent', 'marginal', 'excluded']);
+const status = z.enum(['consistent', 'marginal', 'untested', 'excluded']);
 
 export const candidateSchema = z.object({
   id: z.string(),
   name: z.string(),
   category: z.string(),
-  status: status.describe('consistent: albedo, temperature and band all fit; marginal: one test is borderline; excluded: a test fails.'),
+  status: status.describe('consistent: albedo, temperature and band all fit; marginal: one test is borderline; untested: the entry has no temperature window or condensation curve, so it cannot be shown to exist at this temperature; excluded: a test fails.'),
   reasons: z.array(z.string()).describe('Why, in words.'),
   geometricAlbedoRange: z.tuple([z.number(), z.number()]).describe("The entry's value as a geometric-albedo interval in the measured band."),
   geometricAlbedoNominal: z.number(),
@@ -23,7 +23,7 @@ export const candidateSchema = z.object({
   checks: z.object({
     albedo: status,
     temperature: z.object({
-      grade: z.enum(['ok', 'marginal', 'excluded']),
+      grade: z.enum(['ok', 'marginal', 'excluded', 'untested']),
       kind: z.enum(['window', 'condensation', 'none']),
       rangeK: z.tuple([z.number().nullable(), z.number().nullable()]),
     }),
@@ -50,7 +50,17 @@ export const verdictSchema = z.object({
       temperatureTested: z.boolean(),
     })
     .nullable()
-    .describe('The highest feasible cloud-free reference the verdict compares with.'),
+    .describe('The cloud-free ceiling the verdict compares with.'),
+  reference: z
+    .object({
+      id: z.string(),
+      name: z.string(),
+      regime: z.string().describe('The regime of the reference: planet class, temperature window and band.'),
+      geometricAlbedoCeiling: z.number().describe('The largest geometric albedo of the reference in the measured band.'),
+      sources: z.array(z.string()),
+    })
+    .nullable()
+    .describe('The cloud-free reference used, chosen by planet class, temperature posterior and band.'),
   planetClass: z.object({
     planetClass: z.enum(['giant', 'rocky', 'either']),
     basis: z.enum(['assumption', 'radius']),
